@@ -1,0 +1,39 @@
+// One Jest run, three projects: the pure domain library, the server (real PostgreSQL) and the
+// Angular client (jsdom). See DEVELOPERS.md for how the test command drives them.
+const tsJest = ['ts-jest', { tsconfig: '<rootDir>/tsconfig.spec.json', isolatedModules: true }];
+module.exports = {
+  projects: [
+    {
+      displayName: 'shared',
+      rootDir: __dirname,
+      testEnvironment: 'node',
+      testMatch: ['<rootDir>/shared/**/*.spec.ts', '<rootDir>/templates/**/*.spec.ts'],
+      transform: { '^.+\\.ts$': tsJest },
+    },
+    {
+      displayName: 'server',
+      rootDir: __dirname,
+      testEnvironment: 'node',
+      testMatch: ['<rootDir>/server/**/*.spec.ts', '<rootDir>/fakes/**/*.spec.ts'],
+      transform: { '^.+\\.ts$': tsJest },
+      setupFiles: ['<rootDir>/test/support/env.ts'],
+    },
+    {
+      displayName: 'client',
+      rootDir: __dirname,
+      testMatch: ['<rootDir>/src/**/*.spec.ts'],
+      ...require('jest-preset-angular/presets').createCjsPreset({ tsconfig: '<rootDir>/tsconfig.spec.json' }),
+      testEnvironment: 'jest-preset-angular/environments/jest-jsdom-env',
+      setupFilesAfterEach: undefined,
+      setupFilesAfterEnv: ['<rootDir>/src/test-setup.ts'],
+    },
+    {
+      displayName: 'e2e',
+      rootDir: __dirname,
+      testEnvironment: 'node',
+      testMatch: ['<rootDir>/test/e2e/**/*.test.ts', '<rootDir>/test/security/**/*.test.ts', '<rootDir>/test/faults/**/*.test.ts'],
+      transform: { '^.+\\.ts$': tsJest },
+      setupFiles: ['<rootDir>/test/support/env.ts'],
+    },
+  ],
+};
