@@ -24,7 +24,6 @@ module.exports = {
       testMatch: ['<rootDir>/src/**/*.spec.ts'],
       ...require('jest-preset-angular/presets').createCjsPreset({ tsconfig: '<rootDir>/tsconfig.spec.json' }),
       testEnvironment: 'jest-preset-angular/environments/jest-jsdom-env',
-      setupFilesAfterEach: undefined,
       setupFilesAfterEnv: ['<rootDir>/src/test-setup.ts'],
     },
     {

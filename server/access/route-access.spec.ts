@@ -1,0 +1,113 @@
+/**
+ * The role x route x organization matrix, walked over the router's own table: every route, every
+ * role, own organization and another one. A route added without an entry here fails the suite.
+ */
+import request from 'supertest';
+import { startTestApp, type TestApp } from '../../test/support/test-app';
+import { buildLabScenario, signIn } from '../../test/support/factories';
+import { routeTable } from '../route-table';
+import { ROLES, type Role } from '../../shared/access/roles';
+
+const LAB_ALL: Role[] = ['lab-admin', 'engineer', 'reviewer', 'billing'];
+const EVERY_MEMBER: Role[] = [...ROLES];
+type Expect = Role[] | 'public' | 'signed-in';
+
+/** Who may call each route: written by hand from the product's rules, not read from the code. */
+const EXPECTED: Record<string, Expect> = {
+  'get /health': 'public',
+  'post /auth/sign-in': 'public',
+  'post /auth/refresh': 'public',
+  'post /auth/sign-out': 'public',
+  'post /auth/sign-out-everywhere': 'signed-in',
+  'get /me': 'signed-in',
+  'get /clients': LAB_ALL,
+  'get /clients/:id': LAB_ALL,
+  'post /clients': ['lab-admin', 'engineer'],
+  'get /devices': LAB_ALL,
+  'get /devices/:id': LAB_ALL,
+  'post /devices': ['lab-admin', 'engineer'],
+  'get /rule-sets': LAB_ALL,
+  'get /rule-sets/:id': LAB_ALL,
+  'get /plans': LAB_ALL,
+  'get /plans/:id': LAB_ALL,
+  'post /plans': ['lab-admin', 'engineer'],
+  'get /runs': LAB_ALL,
+  'post /runs': ['lab-admin', 'engineer'],
+  'get /runs/:id': LAB_ALL,
+  'put /runs/:id/cases/:caseId/reading': ['lab-admin', 'engineer'],
+  'post /runs/:id/submit': ['lab-admin', 'engineer'],
+  'post /runs/:id/return': ['lab-admin', 'reviewer'],
+  'post /runs/:id/approve': ['lab-admin', 'reviewer'],
+  'post /runs/:id/issue': ['lab-admin', 'reviewer'],
+  'get /reports': EVERY_MEMBER,
+  'get /reports/:id': EVERY_MEMBER,
+  'get /reports/:id/pdf': EVERY_MEMBER,
+  'get /verify/:token': 'public',
+};
+
+let t: TestApp;
+let s: Awaited<ReturnType<typeof buildLabScenario>>;
+let other: Awaited<ReturnType<typeof buildLabScenario>>;
+const tokens = new Map<Role, { token: string; org: string }>();
+
+beforeAll(async () => {
+  t = await startTestApp();
+  s = await buildLabScenario(t.sequelize);
+  other = await buildLabScenario(t.sequelize);
+  const people: [Role, { email: string }, string][] = [
+    ['lab-admin', s.admin, s.lab.id],
+    ['engineer', s.engineer, s.lab.id],
+    ['reviewer', s.reviewer, s.lab.id],
+    ['billing', s.billing, s.lab.id],
+    ['manufacturer-admin', s.makerAdmin, s.maker.id],
+    ['manufacturer-viewer', s.makerViewer, s.maker.id],
+  ];
+  for (const [role, person, org] of people) tokens.set(role, { token: (await signIn(t.app, person.email)).token, org });
+}, 60_000);
+afterAll(() => t.close());
+
+const routes = () =>
+  routeTable({ sequelize: {} as never, tokens: { secret: 'x', accessTtlSeconds: 1, refreshTtlSeconds: 1 }, secureCookies: false, reports: {} as never }).map((r) => `${r.method} ${r.path}`);
+
+function fill(path: string): string {
+  return path.replace(':caseId', s.cases[0].id).replace(':token', 'no-such-token-000').replace(':id', s.device.id);
+}
+
+function call(key: string, auth?: { token: string; org: string }) {
+  const [method, path] = key.split(' ');
+  let r = (request(t.app) as unknown as Record<string, (u: string) => request.Test>)[method](`/api${fill(path)}`);
+  if (auth) r = r.set('Authorization', `Bearer ${auth.token}`).set('X-Organization-Id', auth.org);
+  return method === 'get' ? r : r.send({});
+}
+
+test('every route in the router table has an expected access rule, and every rule a route', () => {
+  const keys = routes();
+  expect(keys.filter((k) => !(k in EXPECTED))).toEqual([]);
+  expect(Object.keys(EXPECTED).filter((k) => !keys.includes(k))).toEqual([]);
+});
+
+describe.each(Object.entries(EXPECTED))('%s', (key, expected) => {
+  if (expected === 'public') {
+    test('answers without sign-in', async () => {
+      const res = await call(key);
+      expect([401, 403]).not.toContain(res.status);
+    });
+    return;
+  }
+  test('refuses an anonymous caller with 401', async () => {
+    expect((await call(key)).status).toBe(401);
+  });
+  test.each([...ROLES])('role %s', async (role) => {
+    const res = await call(key, tokens.get(role)!);
+    const allowed = expected === 'signed-in' || expected.includes(role);
+    if (allowed) expect([401, 403]).not.toContain(res.status);
+    else expect(res.status).toBe(403);
+  });
+  if (expected !== 'signed-in') {
+    test('another organization named as active answers 404', async () => {
+      const me = tokens.get(expected[0])!;
+      const res = await call(key, { token: me.token, org: other.lab.id });
+      expect(res.status).toBe(404);
+    });
+  }
+});

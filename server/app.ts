@@ -1,0 +1,62 @@
+/** Builds the Express application; never listens (main.ts does, tests use supertest on it). */
+import fs from 'node:fs';
+import path from 'node:path';
+import express from 'express';
+import helmet from 'helmet';
+import cookieParser from 'cookie-parser';
+import type { Sequelize } from 'sequelize';
+import { configurePassport, identify } from './auth/passport';
+import { apiNotFound, errorHandler } from './http/error-handler';
+import { buildRouter } from './http/router';
+import { routeTable, type RouteTableDeps } from './route-table';
+
+export interface AppDeps extends Omit<RouteTableDeps, 'sequelize'> {
+  sequelize: Sequelize;
+  clientDistDir?: string;
+  log?: (entry: Record<string, unknown>) => void;
+}
+
+export function buildApp(deps: AppDeps): express.Express {
+  const log = deps.log ?? ((entry) => console.error(JSON.stringify(entry)));
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.set('query parser', 'simple');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"], // Angular Material sets inline styles on elements
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+  const passport = configurePassport(deps.tokens.secret);
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(cookieParser());
+  api.use(identify(passport));
+  api.use(buildRouter(deps.sequelize, routeTable(deps)));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (deps.clientDistDir && fs.existsSync(path.join(deps.clientDistDir, 'index.html'))) {
+    const dist = deps.clientDistDir;
+    app.use(express.static(dist, { index: false, maxAge: '1h', setHeaders: (res, file) => file.endsWith('.html') && res.setHeader('Cache-Control', 'no-cache') }));
+    // Client-side routes (sign-in, /verify/<token>, ...) all load the app shell.
+    app.get('/{*splat}', (_req, res) => res.setHeader('Cache-Control', 'no-cache').sendFile(path.join(dist, 'index.html')));
+  }
+  app.use(errorHandler(log));
+  return app;
+}

@@ -1,0 +1,21 @@
+import { AuditEntry } from '../db/models';
+import type { RouteContext } from '../http/route';
+
+/** Append one entry to the audit log, inside the caller's transaction (so it commits with the change). */
+export async function audit(
+  ctx: Pick<RouteContext, 'principal' | 'organizationId' | 'transaction'>,
+  entry: { action: string; entity: string; entityId?: string | null; before?: unknown; after?: unknown },
+): Promise<void> {
+  await AuditEntry.create(
+    {
+      organizationId: ctx.organizationId,
+      userId: ctx.principal?.userId ?? null,
+      action: entry.action,
+      entity: entry.entity,
+      entityId: entry.entityId ?? null,
+      before: entry.before ?? null,
+      after: entry.after ?? null,
+    },
+    { transaction: ctx.transaction ?? undefined },
+  );
+}

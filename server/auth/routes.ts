@@ -1,0 +1,115 @@
+import type { Sequelize } from 'sequelize';
+import type { Request, Response } from 'express';
+import { User } from '../db/models';
+import { route, type RouteDef } from '../http/route';
+import { unauthorized } from '../http/problem';
+import { signInSchema, type SignInBody } from '../../shared/schemas/auth';
+import { asSystem } from '../tenancy/tenant-transaction';
+import { AuditEntry } from '../db/models';
+import { DUMMY_HASH, verifyPassword } from './password';
+import { issueRefreshToken, loadPrincipal, revokeAllRefreshTokens, revokeRefreshToken, rotateRefreshToken, signAccessToken, type TokenSettings } from './tokens';
+
+export const REFRESH_COOKIE = 'sidecheck_refresh';
+
+export interface AuthDeps {
+  sequelize: Sequelize;
+  tokens: TokenSettings;
+  secureCookies: boolean;
+}
+
+function setRefreshCookie(res: Response, token: string, deps: AuthDeps): void {
+  res.cookie(REFRESH_COOKIE, token, {
+    httpOnly: true,
+    secure: deps.secureCookies,
+    sameSite: 'strict',
+    path: '/api/auth',
+    maxAge: deps.tokens.refreshTtlSeconds * 1000,
+  });
+}
+
+function readRefreshCookie(req: Request): string | null {
+  const value = (req.cookies as Record<string, string> | undefined)?.[REFRESH_COOKIE];
+  return typeof value === 'string' && value.length > 0 && value.length < 200 ? value : null;
+}
+
+async function session(userId: string, deps: AuthDeps) {
+  const principal = await loadPrincipal(userId);
+  if (!principal) throw unauthorized();
+  return { accessToken: signAccessToken(principal, deps.tokens), expiresIn: deps.tokens.accessTtlSeconds, user: principal };
+}
+
+export function authRoutes(deps: AuthDeps): RouteDef[] {
+  return [
+    route<SignInBody>({
+      method: 'post',
+      path: '/auth/sign-in',
+      summary: 'Sign in with e-mail and password; sets the refresh cookie',
+      access: { kind: 'public' },
+      bodySchema: signInSchema,
+      transaction: 'none',
+      async handler(ctx) {
+        const user = await User.findOne({ where: deps.sequelize.where(deps.sequelize.fn('lower', deps.sequelize.col('email')), ctx.body.email.toLowerCase()) });
+        const ok = await verifyPassword(user?.passwordHash ?? DUMMY_HASH, ctx.body.password);
+        await asSystem(deps.sequelize, (t) =>
+          AuditEntry.create({ organizationId: null, userId: user?.id ?? null, action: ok && user ? 'sign-in' : 'sign-in-failed', entity: 'user', entityId: user?.id ?? null, after: { email: ctx.body.email.slice(0, 254) } }, { transaction: t }),
+        );
+        if (!user || !ok) throw unauthorized('The e-mail address or password is not right.');
+        setRefreshCookie(ctx.res, await issueRefreshToken(user.id, deps.tokens), deps);
+        ctx.status(200);
+        return session(user.id, deps);
+      },
+    }),
+    route({
+      method: 'post',
+      path: '/auth/refresh',
+      summary: 'Exchange the refresh cookie for a new access token (rotates the cookie)',
+      access: { kind: 'public' },
+      transaction: 'none',
+      async handler(ctx) {
+        const token = readRefreshCookie(ctx.req);
+        if (!token) throw unauthorized('Your session has ended. Sign in again.');
+        const rotated = await rotateRefreshToken(deps.sequelize, token, deps.tokens);
+        setRefreshCookie(ctx.res, rotated.refreshToken, deps);
+        ctx.status(200);
+        return session(rotated.userId, deps);
+      },
+    }),
+    route({
+      method: 'post',
+      path: '/auth/sign-out',
+      summary: 'End this session (revokes the refresh cookie)',
+      access: { kind: 'public' },
+      transaction: 'none',
+      async handler(ctx) {
+        const token = readRefreshCookie(ctx.req);
+        if (token) await revokeRefreshToken(token);
+        ctx.res.clearCookie(REFRESH_COOKIE, { path: '/api/auth' });
+        ctx.status(204);
+        return undefined;
+      },
+    }),
+    route({
+      method: 'post',
+      path: '/auth/sign-out-everywhere',
+      summary: 'End every session of the signed-in person',
+      access: { kind: 'signed-in' },
+      transaction: 'none',
+      async handler(ctx) {
+        const revoked = await revokeAllRefreshTokens(ctx.principal!.userId);
+        ctx.res.clearCookie(REFRESH_COOKIE, { path: '/api/auth' });
+        ctx.status(200);
+        return { revokedSessions: revoked };
+      },
+    }),
+    route({
+      method: 'get',
+      path: '/me',
+      summary: 'The signed-in person and their organizations',
+      access: { kind: 'signed-in' },
+      transaction: 'none',
+      async handler(ctx) {
+        return loadPrincipal(ctx.principal!.userId);
+      },
+    }),
+  ];
+}

@@ -1,0 +1,74 @@
+/**
+ * Server configuration, read once from the environment. Every value has a development default
+ * that keeps the product on 127.0.0.1; production deployments set the variables explicitly.
+ */
+import path from 'node:path';
+import { projectRoot } from './project-root';
+
+export interface Config {
+  env: 'development' | 'test' | 'production';
+  port: number;
+  host: string;
+  publicUrl: string;
+  databaseUrl: string;
+  dataDir: string;
+  jwtSecret: string;
+  accessTokenTtlSeconds: number;
+  refreshTokenTtlSeconds: number;
+  keyEncryptionSecret: string;
+  smtp: { host: string; port: number; from: string };
+  payments: { secretKey: string; host: string; port: number; protocol: 'http' | 'https'; webhookSecret: string };
+  clientDistDir: string;
+  secureCookies: boolean;
+}
+
+function required(name: string, fallback?: string): string {
+  const value = process.env[name] ?? fallback;
+  if (value === undefined || value === '') {
+    throw new Error(`config: environment variable ${name} is required`);
+  }
+  return value;
+}
+
+function integer(name: string, fallback: number): number {
+  const raw = process.env[name];
+  if (raw === undefined || raw === '') return fallback;
+  const value = Number(raw);
+  if (!Number.isInteger(value) || value < 0) throw new Error(`config: ${name} must be a whole number, got "${raw}"`);
+  return value;
+}
+
+export function loadConfig(): Config {
+  const env = (process.env.NODE_ENV ?? 'development') as Config['env'];
+  const port = integer('PORT', 4610);
+  const root = projectRoot();
+  const production = env === 'production';
+  // Development and tests get fixed, clearly marked secrets; production must supply its own.
+  const devSecret = (what: string) => (production ? undefined : `sidecheck-development-only-${what}`);
+  return {
+    env,
+    port,
+    host: process.env.HOST ?? '127.0.0.1',
+    publicUrl: process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`,
+    databaseUrl: required('DATABASE_URL'),
+    dataDir: process.env.SIDECHECK_DATA_DIR ?? path.join(root, '.data', 'files'),
+    jwtSecret: required('JWT_SECRET', devSecret('jwt')),
+    accessTokenTtlSeconds: integer('ACCESS_TOKEN_TTL_SECONDS', 600),
+    refreshTokenTtlSeconds: integer('REFRESH_TOKEN_TTL_SECONDS', 14 * 24 * 3600),
+    keyEncryptionSecret: required('KEY_ENCRYPTION_SECRET', devSecret('signing-keys')),
+    smtp: {
+      host: process.env.SMTP_HOST ?? '127.0.0.1',
+      port: integer('SMTP_PORT', 4625),
+      from: process.env.MAIL_FROM ?? 'Sidecheck <no-reply@sidecheck.test>',
+    },
+    payments: {
+      secretKey: required('PAYMENTS_SECRET_KEY', devSecret('payments') && 'sk_test_sidecheck_local'),
+      host: process.env.PAYMENTS_HOST ?? '127.0.0.1',
+      port: integer('PAYMENTS_PORT', 4627),
+      protocol: (process.env.PAYMENTS_PROTOCOL as 'http' | 'https') ?? 'http',
+      webhookSecret: required('PAYMENTS_WEBHOOK_SECRET', devSecret('webhook') && 'whsec_sidecheck_local'),
+    },
+    clientDistDir: process.env.CLIENT_DIST_DIR ?? path.join(root, 'dist', 'client', 'browser'),
+    secureCookies: production || process.env.SECURE_COOKIES === 'true',
+  };
+}

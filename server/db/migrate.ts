@@ -1,0 +1,20 @@
+import { Umzug, SequelizeStorage } from 'umzug';
+import type { Sequelize } from 'sequelize';
+import { migration as foundation } from './migrations/0001-foundation';
+
+/** Every migration, in order. Add a new file under migrations/ and append it here. */
+const MIGRATIONS = [foundation];
+
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: MIGRATIONS.map((m) => ({ name: m.name, up: m.up, down: m.down })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}
+
+export async function migrateUp(sequelize: Sequelize): Promise<string[]> {
+  const applied = await createMigrator(sequelize).up();
+  return applied.map((m) => m.name);
+}

@@ -1,0 +1,26 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { Role } from '../../../shared/access/roles';
+
+/** A row of `memberships`. */
+export class Membership extends Model<InferAttributes<Membership>, InferCreationAttributes<Membership>> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare userId: string;
+  declare role: Role;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Membership.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        organizationId: { type: DataTypes.UUID, allowNull: false },
+        userId: { type: DataTypes.UUID, allowNull: false },
+        role: { type: DataTypes.TEXT, allowNull: false },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'memberships' },
+    );
+  }
+}

@@ -1,0 +1,25 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+/** A row of `users`. */
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<string>;
+  declare email: string;
+  declare displayName: string;
+  declare passwordHash: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    User.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        email: { type: DataTypes.TEXT, allowNull: false },
+        displayName: { type: DataTypes.TEXT, allowNull: false },
+        passwordHash: { type: DataTypes.TEXT },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'users' },
+    );
+  }
+}

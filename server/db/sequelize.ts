@@ -1,0 +1,20 @@
+import { Sequelize } from 'sequelize';
+import { requestScope } from './request-scope';
+
+let clsInstalled = false;
+
+/** One Sequelize instance per process, joined to the request scope so queries find their transaction. */
+export function createSequelize(databaseUrl: string, options: { poolMax?: number; logging?: boolean } = {}): Sequelize {
+  if (!clsInstalled) {
+    Sequelize.useCLS(requestScope as never);
+    clsInstalled = true;
+  }
+  return new Sequelize(databaseUrl, {
+    dialect: 'postgres',
+    logging: options.logging ? (sql) => console.log(sql) : false,
+    pool: { max: options.poolMax ?? 20, min: 0, idle: 10_000, acquire: 10_000 },
+    define: { underscored: true, timestamps: true },
+    dialectOptions: { application_name: 'sidecheck', statement_timeout: 30_000 },
+    retry: { max: 0 },
+  });
+}

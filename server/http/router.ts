@@ -1,0 +1,78 @@
+import express, { type Request, type Response } from 'express';
+import type { Sequelize } from 'sequelize';
+import type { Role } from '../../shared/access/roles';
+import { inTenant } from '../tenancy/tenant-transaction';
+import { forbidden, notFound, unauthorized } from './problem';
+import { isFileAnswer, type Principal, type RouteContext, type RouteDef } from './route';
+import { validate } from './validation';
+
+export interface ApiKeyPrincipal {
+  organizationId: string;
+  keyId: string;
+}
+
+type AuthedRequest = Request & { principal?: Principal | null; tokenRejected?: boolean; apiKey?: ApiKeyPrincipal | null };
+
+/** Work out who is calling and in which organization, or throw the problem that explains why not. */
+export function resolveAccess(def: RouteDef, req: AuthedRequest): { organizationId: string | null; roles: Role[] } {
+  const access = def.access;
+  if (access.kind === 'public') return { organizationId: null, roles: [] };
+  if (access.kind === 'member-or-api-key' && req.apiKey) return { organizationId: req.apiKey.organizationId, roles: [] };
+  const principal = req.principal;
+  if (!principal) throw unauthorized(req.tokenRejected ? 'Your sign-in has expired or is not valid. Sign in again.' : 'Sign in to continue.');
+  if (access.kind === 'signed-in') return { organizationId: null, roles: [] };
+  const organizationId = req.header('x-organization-id') ?? principal.memberships[0]?.organizationId ?? null;
+  const membership = principal.memberships.find((m) => m.organizationId === organizationId);
+  // Someone else's organization answers exactly like one that does not exist.
+  if (!membership) throw notFound('The organization');
+  const allowed = membership.roles.filter((r) => access.roles.includes(r));
+  if (allowed.length === 0) throw forbidden('Your role in this organization does not allow this action.');
+  return { organizationId: membership.organizationId, roles: membership.roles };
+}
+
+function send(res: Response, value: unknown, status: number): void {
+  if (isFileAnswer(value)) {
+    res
+      .status(status)
+      .type(value.contentType)
+      .set('Content-Disposition', `${value.disposition ?? 'attachment'}; filename="${value.filename.replace(/[^A-Za-z0-9._-]/g, '_')}"`)
+      .send(value.body);
+    return;
+  }
+  if (value === undefined) {
+    res.status(status === 200 ? 204 : status).end();
+    return;
+  }
+  res.status(status).json(value);
+}
+
+/** Mount route definitions: access check, schema, one tenant transaction, answer after commit. */
+export function buildRouter(sequelize: Sequelize, routes: RouteDef[]): express.Router {
+  const router = express.Router();
+  for (const def of routes) {
+    router[def.method](def.path, async (req: AuthedRequest, res: Response) => {
+      const { organizationId, roles } = resolveAccess(def, req);
+      const body = def.bodySchema ? validate(def.bodySchema, req.body) : req.body;
+      let status = def.method === 'post' ? 201 : 200;
+      const context = (transaction: RouteContext['transaction']): RouteContext => ({
+        req,
+        res,
+        principal: req.principal ?? null,
+        organizationId,
+        roles,
+        transaction,
+        params: req.params as Record<string, string>,
+        query: req.query as Record<string, unknown>,
+        body,
+        status: (code: number) => {
+          status = code;
+        },
+      });
+      const value = def.transaction === 'none'
+        ? await def.handler(context(null))
+        : await inTenant(sequelize, organizationId, (t) => def.handler(context(t)));
+      if (!res.headersSent) send(res, value, status);
+    });
+  }
+  return router;
+}

@@ -1,0 +1,133 @@
+/**
+ * Issuing a report: one transaction renders and signs the PDF, stores it with its SHA-256,
+ * moves the run to issued, writes the audit entry and enqueues the client's e-mail. A failure
+ * anywhere rolls everything back, so there is either a complete issued report or none.
+ */
+import crypto from 'node:crypto';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { Organization, Report, ReportStatusChange, TestRun, User } from '../db/models';
+import type { RouteContext } from '../http/route';
+import { conflict, notFound } from '../http/problem';
+import { audit } from '../audit/audit';
+import { nextCounter } from '../runs/run-number';
+import { presentRun } from '../runs/run-presenter';
+import { buildReportDocument } from './build-report-document';
+import { activeSigningIdentity } from './signing-identity-store';
+import { renderSignedReport } from '../../templates/report/render-signed-report';
+import { reportIssuedEmail } from '../../templates/email/report-issued';
+import type { Verdict } from '../../shared/uncertainty/decision-rule';
+
+export interface ReportDeps {
+  sequelize: Sequelize;
+  publicUrl: string;
+  keyEncryptionSecret: string;
+  enqueueMail: (transaction: RouteContext['transaction'], mail: { to: string; subject: string; text: string; html: string; attachments?: { filename: string; contentBase64: string; contentType: string }[] }) => Promise<void>;
+}
+
+const VERDICT_WORDS: Record<Verdict, string> = { pass: 'Pass', 'conditional-pass': 'Conditional pass', 'conditional-fail': 'Conditional fail', fail: 'Fail' };
+
+export function summarizeVerdicts(verdicts: Verdict[]): string {
+  const counts = verdicts.reduce<Record<string, number>>((acc, v) => ((acc[v] = (acc[v] ?? 0) + 1), acc), {});
+  return (Object.keys(VERDICT_WORDS) as Verdict[]).filter((v) => counts[v]).map((v) => `${counts[v]} ${VERDICT_WORDS[v].toLowerCase()}`).join(', ') || 'no results';
+}
+
+export async function issueReport(deps: ReportDeps, ctx: RouteContext, run: TestRun) {
+  if (run.state !== 'approved') throw conflict(`Only an authorized run can be issued; this one is ${run.state}.`, { code: 'illegal-transition' });
+  const lab = (await Organization.findByPk(run.organizationId))!;
+  const n = await nextCounter(deps.sequelize, run.organizationId, `report-${new Date().getUTCFullYear()}`, ctx.transaction);
+  const reportNumber = `${lab.code}-${new Date().getUTCFullYear()}-${String(n).padStart(4, '0')}`;
+  const verifyToken = crypto.randomBytes(18).toString('base64url');
+  const issuedAt = new Date();
+  const authorizer = (await User.findByPk(run.reviewerId ?? ctx.principal!.userId))!;
+  const built = await buildReportDocument({ run, reportNumber, revision: 1, issuedAt, authorizedBy: authorizer, verificationUrl: `${deps.publicUrl}/verify/${verifyToken}` });
+  const identity = await activeSigningIdentity(run.organizationId, deps.keyEncryptionSecret);
+  const signed = await renderSignedReport(built.doc, identity);
+  const report = await Report.create({
+    organizationId: run.organizationId,
+    runId: run.id,
+    clientOrganizationId: built.clientOrganizationId,
+    reportNumber,
+    revision: 1,
+    verifyToken,
+    sha256: signed.sha256,
+    pdf: signed.pdf,
+    pageCount: signed.pageCount,
+    summary: {
+      device: `${built.doc.device.manufacturer} ${built.doc.device.model}`,
+      serialNumber: built.doc.device.serialNumber,
+      client: built.doc.client.name,
+      lab: lab.name,
+      verdicts: built.verdicts,
+      receivedOn: built.doc.dates.received,
+      testedFrom: built.doc.dates.testedFrom,
+      testedTo: built.doc.dates.testedTo,
+    },
+    issuedBy: ctx.principal!.userId,
+    issuedAt,
+  });
+  const before = presentRun(run);
+  await run.update({ state: 'issued' });
+  await audit(ctx, { action: 'run-issue', entity: 'test-run', entityId: run.id, before, after: { ...presentRun(run), reportId: report.id, reportNumber, sha256: signed.sha256 } });
+  const mail = reportIssuedEmail({
+    contactName: built.contactName,
+    labName: lab.name,
+    reportNumber,
+    deviceLabel: `${built.doc.device.manufacturer} ${built.doc.device.model} (s/n ${built.doc.device.serialNumber})`,
+    verdictSummary: summarizeVerdicts(built.verdicts),
+    downloadUrl: `${deps.publicUrl}/reports/${report.id}`,
+    verifyUrl: `${deps.publicUrl}/verify/${verifyToken}`,
+    attached: (lab.settings as { attachPdfToEmail?: boolean }).attachPdfToEmail === true,
+  });
+  await deps.enqueueMail(ctx.transaction, {
+    to: built.contactEmail,
+    ...mail,
+    attachments: (lab.settings as { attachPdfToEmail?: boolean }).attachPdfToEmail === true
+      ? [{ filename: `${reportNumber}.pdf`, contentBase64: signed.pdf.toString('base64'), contentType: 'application/pdf' }]
+      : undefined,
+  });
+  return presentReport(report, []);
+}
+
+export function reportStatus(changes: ReportStatusChange[]) {
+  const latest = [...changes].sort((a, b) => b.createdAt.getTime() - a.createdAt.getTime())[0];
+  if (!latest) return { status: 'current' as const, reason: null, supersededById: null };
+  return { status: latest.status, reason: latest.reason, supersededById: latest.supersededById };
+}
+
+export function presentReport(r: Report, changes: ReportStatusChange[]) {
+  return {
+    id: r.id,
+    runId: r.runId,
+    reportNumber: r.reportNumber,
+    revision: r.revision,
+    sha256: r.sha256,
+    pageCount: r.pageCount,
+    summary: r.summary,
+    issuedAt: r.issuedAt.toISOString(),
+    verifyPath: `/verify/${r.verifyToken}`,
+    ...reportStatus(changes),
+  };
+}
+
+export async function listReports(sequelize: Sequelize, q: { limit: number; offset: number; search?: string; sort: string; direction: 'ASC' | 'DESC' }) {
+  const SORT: Record<string, string> = { issuedAt: 'r.issued_at', reportNumber: 'r.report_number' };
+  const where = q.search ? `WHERE r.report_number ILIKE :like OR r.summary->>'device' ILIKE :like OR r.summary->>'client' ILIKE :like` : '';
+  const rows = await sequelize.query<Record<string, unknown>>(
+    `SELECT r.id, r.run_id AS "runId", r.report_number AS "reportNumber", r.revision, r.sha256, r.page_count AS "pageCount", r.summary,
+            r.issued_at AS "issuedAt", r.verify_token AS "verifyToken",
+            (SELECT s.status FROM report_status_changes s WHERE s.report_id = r.id ORDER BY s.created_at DESC LIMIT 1) AS status,
+            count(*) OVER () AS total
+       FROM reports r ${where} ORDER BY ${SORT[q.sort] ?? 'r.issued_at'} ${q.direction}, r.id LIMIT :limit OFFSET :offset`,
+    { replacements: { limit: q.limit, offset: q.offset, like: `%${(q.search ?? '').replace(/[%_\\]/g, '\\$&')}%` }, type: QueryTypes.SELECT },
+  );
+  return {
+    total: rows.length ? Number(rows[0].total) : 0,
+    items: rows.map(({ total: _t, verifyToken, status, ...r }) => ({ ...r, status: status ?? 'current', verifyPath: `/verify/${verifyToken}` })),
+  };
+}
+
+export async function loadReport(id: string) {
+  const r = await Report.findByPk(id);
+  if (!r) throw notFound('The report');
+  return r;
+}

@@ -1,0 +1,89 @@
+import { Report, ReportStatusChange } from '../db/models';
+import { fileAnswer, route, type RouteDef } from '../http/route';
+import { notFound } from '../http/problem';
+import { page, readListQuery } from '../http/list-query';
+import { asSystem } from '../tenancy/tenant-transaction';
+import { loadRun } from '../runs/run-service';
+import { issueReport, listReports, loadReport, presentReport, reportStatus, type ReportDeps } from './report-service';
+
+const READERS = ['lab-admin', 'engineer', 'reviewer', 'billing', 'manufacturer-admin', 'manufacturer-viewer'] as const;
+
+export function reportRoutes(deps: ReportDeps): RouteDef[] {
+  return [
+    route({
+      method: 'post',
+      path: '/runs/:id/issue',
+      summary: 'Issue the signed report of an authorized run',
+      access: { kind: 'member', roles: ['lab-admin', 'reviewer'] },
+      async handler(ctx) {
+        return issueReport(deps, ctx, await loadRun(ctx.params.id));
+      },
+    }),
+    route({
+      method: 'get',
+      path: '/reports',
+      summary: 'Issued reports: a lab sees its own, a manufacturer those issued to it',
+      access: { kind: 'member', roles: READERS },
+      async handler(ctx) {
+        const q = readListQuery(ctx.query, { sortable: ['issuedAt', 'reportNumber'], filterable: ['search'], defaultSort: '-issuedAt' });
+        const { items, total } = await listReports(deps.sequelize, { limit: q.pageSize, offset: (q.page - 1) * q.pageSize, search: q.filter.search, sort: q.sort, direction: q.direction });
+        return page(items, total, q);
+      },
+    }),
+    route({
+      method: 'get',
+      path: '/reports/:id',
+      summary: 'One issued report (metadata and status)',
+      access: { kind: 'member', roles: READERS },
+      async handler(ctx) {
+        const r = await loadReport(ctx.params.id);
+        return presentReport(r, await ReportStatusChange.findAll({ where: { reportId: r.id } }));
+      },
+    }),
+    route({
+      method: 'get',
+      path: '/reports/:id/pdf',
+      summary: 'Download the signed PDF exactly as issued',
+      access: { kind: 'member', roles: READERS },
+      async handler(ctx) {
+        const r = await loadReport(ctx.params.id);
+        return fileAnswer({ contentType: 'application/pdf', filename: `${r.reportNumber}-rev${r.revision}.pdf`, body: r.pdf });
+      },
+    }),
+    route({
+      method: 'get',
+      path: '/verify/:token',
+      summary: 'Public: is this report authentic and current?',
+      access: { kind: 'public' },
+      transaction: 'none',
+      async handler(ctx) {
+        // Public lookup by an unguessable token; system scope because the caller has no organization.
+        return asSystem(deps.sequelize, async () => {
+          const token = ctx.params.token;
+          if (!/^[A-Za-z0-9_-]{10,64}$/.test(token)) throw notFound('The report');
+          const r = await Report.findOne({ where: { verifyToken: token }, attributes: { exclude: ['pdf'] } });
+          if (!r) throw notFound('The report');
+          const status = reportStatus(await ReportStatusChange.findAll({ where: { reportId: r.id } }));
+          const supersededBy = status.supersededById ? await Report.findByPk(status.supersededById, { attributes: ['reportNumber', 'revision', 'verifyToken'] }) : null;
+          const s = r.summary as Record<string, unknown>;
+          return {
+            reportNumber: r.reportNumber,
+            revision: r.revision,
+            lab: s.lab,
+            client: s.client,
+            device: s.device,
+            serialNumber: s.serialNumber,
+            receivedOn: s.receivedOn,
+            testedFrom: s.testedFrom,
+            testedTo: s.testedTo,
+            issuedAt: r.issuedAt.toISOString(),
+            sha256: r.sha256,
+            status: status.status,
+            reason: status.reason,
+            supersededBy: supersededBy && { reportNumber: supersededBy.reportNumber, revision: supersededBy.revision, verifyPath: `/verify/${supersededBy.verifyToken}` },
+          };
+        });
+      },
+    }),
+  ];
+}

@@ -1,0 +1,33 @@
+/** Every API route of the product, in one table: the router mounts it and the access test walks it. */
+import type { Sequelize } from 'sequelize';
+import type { RouteDef } from './http/route';
+import { authRoutes } from './auth/routes';
+import { clientRoutes } from './clients/routes';
+import { deviceRoutes } from './devices/routes';
+import { healthRoutes } from './health/routes';
+import { planRoutes } from './plans/routes';
+import { reportRoutes } from './reports/routes';
+import { ruleSetRoutes } from './rule-sets/routes';
+import { runRoutes } from './runs/routes';
+import type { TokenSettings } from './auth/tokens';
+import type { ReportDeps } from './reports/report-service';
+
+export interface RouteTableDeps {
+  sequelize: Sequelize;
+  tokens: TokenSettings;
+  secureCookies: boolean;
+  reports: ReportDeps;
+}
+
+export function routeTable(deps: RouteTableDeps): RouteDef[] {
+  return [
+    ...healthRoutes(deps.sequelize),
+    ...authRoutes({ sequelize: deps.sequelize, tokens: deps.tokens, secureCookies: deps.secureCookies }),
+    ...clientRoutes(),
+    ...deviceRoutes(),
+    ...ruleSetRoutes(),
+    ...planRoutes(),
+    ...runRoutes(deps.sequelize),
+    ...reportRoutes(deps.reports),
+  ] as RouteDef[];
+}

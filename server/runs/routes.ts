@@ -1,0 +1,101 @@
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { route, type RouteDef } from '../http/route';
+import { readListQuery, page } from '../http/list-query';
+import { badRequest } from '../http/problem';
+import { createRunSchema, reasonSchema, saveReadingSchema, type SaveReadingBody } from '../../shared/schemas/records';
+import { RUN_STATES, type RunAction } from '../../shared/runs/run-state';
+import { createRun, loadRun, runDetail, saveReading, transition } from './run-service';
+
+const LAB = ['lab-admin', 'engineer', 'reviewer', 'billing'] as const;
+const SORT_COLUMNS: Record<string, string> = { number: 'r.number', state: 'r.state', updatedAt: 'r.updated_at', createdAt: 'r.created_at', model: 'd.model', client: 'c.name' };
+
+export function runRoutes(sequelize: Sequelize): RouteDef[] {
+  const act = (action: RunAction, roles: readonly ('lab-admin' | 'engineer' | 'reviewer')[], summary: string, withReason = false): RouteDef =>
+    route<{ reason?: string }>({
+      method: 'post',
+      path: `/runs/:id/${action}`,
+      summary,
+      access: { kind: 'member', roles },
+      bodySchema: withReason ? reasonSchema : undefined,
+      async handler(ctx) {
+        ctx.status(200);
+        const run = await transition(ctx, await loadRun(ctx.params.id), action, ctx.body?.reason);
+        return runDetail(run);
+      },
+    });
+
+  return [
+    route({
+      method: 'get',
+      path: '/runs',
+      summary: 'Test runs, paginated, sortable and filterable (state, search)',
+      access: { kind: 'member', roles: LAB },
+      async handler(ctx) {
+        const q = readListQuery(ctx.query, { sortable: Object.keys(SORT_COLUMNS), filterable: ['state', 'search', 'engineerId'], defaultSort: '-updatedAt' });
+        const states = q.filter.state?.split(',') ?? [];
+        if (states.some((s) => !(RUN_STATES as readonly string[]).includes(s))) throw badRequest(`Unknown state in "${q.filter.state}".`);
+        const where: string[] = [];
+        const replacements: Record<string, unknown> = { limit: q.pageSize, offset: (q.page - 1) * q.pageSize };
+        if (states.length) {
+          where.push('r.state IN (:states)');
+          replacements.states = states;
+        }
+        if (q.filter.search) {
+          where.push('(r.number ILIKE :like OR d.model ILIKE :like OR d.serial_number ILIKE :like OR c.name ILIKE :like)');
+          replacements.like = `%${q.filter.search.replace(/[%_\\]/g, '\\$&')}%`;
+        }
+        if (q.filter.engineerId) {
+          where.push('r.engineer_id = :engineer');
+          replacements.engineer = q.filter.engineerId;
+        }
+        const sql = `FROM test_runs r JOIN test_plans p ON p.id = r.plan_id JOIN devices d ON d.id = p.device_id JOIN clients c ON c.id = d.client_id
+          ${where.length ? 'WHERE ' + where.join(' AND ') : ''}`;
+        const rows = await sequelize.query<Record<string, unknown>>(
+          `SELECT r.id, r.number, r.state, r.updated_at AS "updatedAt", r.created_at AS "createdAt", r.engineer_id AS "engineerId",
+                  p.name AS "planName", d.manufacturer, d.model, d.serial_number AS "serialNumber", c.name AS client, count(*) OVER () AS total
+           ${sql} ORDER BY ${SORT_COLUMNS[q.sort]} ${q.direction}, r.id LIMIT :limit OFFSET :offset`,
+          { replacements, type: QueryTypes.SELECT },
+        );
+        let total = rows.length ? Number(rows[0].total) : 0;
+        if (!rows.length && q.page > 1) {
+          const [{ n }] = await sequelize.query<{ n: string }>(`SELECT count(*) AS n ${sql}`, { replacements, type: QueryTypes.SELECT });
+          total = Number(n);
+        }
+        return page(rows.map(({ total: _t, ...r }) => r), total, q);
+      },
+    }),
+    route({
+      method: 'post',
+      path: '/runs',
+      summary: 'Start a test run from a plan',
+      access: { kind: 'member', roles: ['lab-admin', 'engineer'] },
+      bodySchema: createRunSchema,
+      async handler(ctx) {
+        const run = await createRun(sequelize, ctx, (ctx.body as { planId: string }).planId);
+        return runDetail(run);
+      },
+    }),
+    route({
+      method: 'get',
+      path: '/runs/:id',
+      summary: 'A run with its test cases, latest readings and results',
+      access: { kind: 'member', roles: LAB },
+      async handler(ctx) {
+        return runDetail(await loadRun(ctx.params.id));
+      },
+    }),
+    route<SaveReadingBody>({
+      method: 'put',
+      path: '/runs/:id/cases/:caseId/reading',
+      summary: 'Save a reading; the server recomputes the result with the shared engine',
+      access: { kind: 'member-or-api-key', roles: ['lab-admin', 'engineer'] },
+      bodySchema: saveReadingSchema,
+      async handler(ctx) {
+        return saveReading(ctx, await loadRun(ctx.params.id), ctx.params.caseId, ctx.body.values);
+      },
+    }),
+    act('submit', ['lab-admin', 'engineer'], 'Send the run for technical review'),
+    act('return', ['lab-admin', 'reviewer'], 'Return the run to the bench, with a reason', true),
+    act('approve', ['lab-admin', 'reviewer'], 'Authorize the run’s results (four-eyes rule)'),
+  ];
+}

@@ -1,0 +1,34 @@
+import type { Result, TestRun } from '../db/models';
+
+export function presentRun(r: TestRun) {
+  return {
+    id: r.id,
+    number: r.number,
+    state: r.state,
+    planId: r.planId,
+    engineerId: r.engineerId,
+    reviewerId: r.reviewerId,
+    returnReason: r.returnReason,
+    testedFrom: r.testedFrom,
+    testedTo: r.testedTo,
+    createdAt: r.createdAt.toISOString(),
+    updatedAt: r.updatedAt.toISOString(),
+  };
+}
+
+export function presentResult(r: Result) {
+  return {
+    id: r.id,
+    readingId: r.readingId,
+    engineVersion: r.engineVersion,
+    value: r.value,
+    unit: r.unit,
+    limit: r.limitValue,
+    marginDb: r.marginDb,
+    expandedUncertainty: r.expandedUncertainty,
+    coverageFactor: r.coverageFactor,
+    verdict: r.verdict,
+    detail: r.detail,
+    createdAt: r.createdAt.toISOString(),
+  };
+}

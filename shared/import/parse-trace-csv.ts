@@ -1,0 +1,142 @@
+import { ImportError } from './import-error';
+import { parseCsvNumber } from './parse-csv-number';
+import { classifyTraceColumn, type TraceColumn } from './trace-column';
+import { FREQUENCY_UNIT_HZ, levelToDbm, normalizeUnit, type LevelUnit } from './trace-units';
+
+/** A spectrum trace in SI units, frequencies strictly ascending. */
+export interface ImportedTrace {
+  frequencyHz: Float64Array;
+  levelDbm: Float64Array;
+  /** Resolution bandwidth from an `rbw` column (constant) or a `# RBW: 300 Hz` comment. */
+  rbwHz?: number;
+}
+
+const NAME = 'parseTraceCsv';
+// `# RBW: 300 Hz`, `# rbw_hz=300`, `# RBW 3 kHz`: a unit before or after the number.
+const RBW_COMMENT =
+  /(?:^|[^a-z])rbw(?![a-z])[\s_]*(hz|khz|mhz)?\s*[:=]?\s*(\d*\.?\d+(?:e[+-]?\d+)?)\s*(hz|khz|mhz)?/i;
+
+/**
+ * Parses a spectrum-analyzer trace exported as CSV with a header row. The header names a
+ * frequency column (Hz, kHz, MHz, GHz) and a level column (dBm, dBW, dBuV into 50 ohm, W, mW),
+ * in either order, e.g. `frequency_hz,level_dbm` or `Level (dBuV);Frequency (MHz)`; an optional
+ * `rbw` column (constant) gives the resolution bandwidth; other columns are ignored. Fields are
+ * separated by `,`, `;` or tab (from the header); with `;` or tab a decimal comma is accepted.
+ * Lines starting with `#` are comments (`# RBW: 300 Hz` is read), blank lines are skipped.
+ *
+ * Frequencies must be strictly ascending: a sweep is, and a file that is not has probably been
+ * merged or edited, so it is refused rather than silently sorted.
+ *
+ * @throws ImportError with the 1-based line and column (field number) of the first problem.
+ * @example parseTraceCsv('frequency_hz,level_dbm\n1000,-20\n2000,-30\n')
+ * // { frequencyHz: Float64Array [1000, 2000], levelDbm: Float64Array [-20, -30] }
+ */
+export function parseTraceCsv(text: string): ImportedTrace {
+  const lines = text.split(/\r\n|\n|\r/);
+  let commentRbwHz: number | undefined;
+  let header: { columns: TraceColumn[]; delimiter: string; line: number } | undefined;
+  const frequencies: number[] = [];
+  const levels: number[] = [];
+  let rbwHz: number | undefined;
+  let freqIndex = -1;
+  let levelIndex = -1;
+  let rbwIndex = -1;
+  let hzPerUnit = 1;
+  let levelUnit: LevelUnit = 'dbm';
+
+  for (let k = 0; k < lines.length; k++) {
+    const line = k + 1;
+    const content = (k === 0 ? lines[k].replace(/^\ufeff/, '') : lines[k]).trim();
+    if (content === '') continue;
+    if (content[0] === '#') {
+      const rbw = RBW_COMMENT.exec(content);
+      if (rbw !== null) {
+        const unit = FREQUENCY_UNIT_HZ[normalizeUnit(rbw[1] ?? rbw[3] ?? 'hz')] ?? 1;
+        commentRbwHz = Number(rbw[2]) * unit;
+      }
+      continue;
+    }
+    if (header === undefined) {
+      header = readHeader(content, line);
+      freqIndex = header.columns.findIndex((c) => c.role === 'frequency');
+      levelIndex = header.columns.findIndex((c) => c.role === 'level');
+      rbwIndex = header.columns.findIndex((c) => c.role === 'rbw');
+      const f = header.columns[freqIndex];
+      const l = header.columns[levelIndex];
+      if (f.role === 'frequency') hzPerUnit = f.hzPerUnit;
+      if (l.role === 'level') levelUnit = l.unit;
+      continue;
+    }
+    const decimalComma = header.delimiter !== ',';
+    const fields = content.split(header.delimiter);
+    const needed = Math.max(freqIndex, levelIndex, rbwIndex) + 1;
+    if (fields.length < needed) {
+      const detail = `${fields.length} field(s), the header has ${header.columns.length}`;
+      throw new ImportError(NAME, detail, { line, column: fields.length });
+    }
+    const number = (index: number, what: string): number => {
+      const value = parseCsvNumber(fields[index], decimalComma);
+      if (Number.isNaN(value)) {
+        const detail = `${what} "${fields[index].trim()}" is not a number`;
+        throw new ImportError(NAME, detail, { line, column: index + 1 });
+      }
+      return value;
+    };
+    const frequencyHz = number(freqIndex, 'frequency') * hzPerUnit;
+    const reading = number(levelIndex, 'level');
+    const levelDbm = levelToDbm(reading, levelUnit);
+    if (Number.isNaN(levelDbm)) {
+      const detail = `level ${reading} ${levelUnit} must be > 0 to be expressed in dBm`;
+      throw new ImportError(NAME, detail, { line, column: levelIndex + 1 });
+    }
+    const previous = frequencies[frequencies.length - 1];
+    if (previous !== undefined && !(frequencyHz > previous)) {
+      const detail = `frequency ${frequencyHz} Hz is not above the previous row's ${previous} Hz (rows must ascend in frequency)`;
+      throw new ImportError(NAME, detail, { line, column: freqIndex + 1 });
+    }
+    if (rbwIndex >= 0) {
+      const rowRbwHz = number(rbwIndex, 'RBW') * (header.columns[rbwIndex] as { hzPerUnit: number }).hzPerUnit;
+      if (rbwHz !== undefined && rowRbwHz !== rbwHz) {
+        throw new ImportError(NAME, `RBW changes from ${rbwHz} Hz to ${rowRbwHz} Hz within the trace`, {
+          line,
+          column: rbwIndex + 1,
+        });
+      }
+      rbwHz = rowRbwHz;
+    }
+    frequencies.push(frequencyHz);
+    levels.push(levelDbm);
+  }
+  if (header === undefined) throw new ImportError(NAME, 'no header row (expected e.g. "frequency_hz,level_dbm")');
+  if (frequencies.length < 2) {
+    throw new ImportError(NAME, `${frequencies.length} data row(s); a trace needs at least 2`, { line: lines.length });
+  }
+  const trace: ImportedTrace = { frequencyHz: Float64Array.from(frequencies), levelDbm: Float64Array.from(levels) };
+  const traceRbwHz = rbwHz ?? commentRbwHz;
+  if (traceRbwHz !== undefined) trace.rbwHz = traceRbwHz;
+  return trace;
+}
+
+function readHeader(content: string, line: number): { columns: TraceColumn[]; delimiter: string; line: number } {
+  const delimiter = content.includes(';') ? ';' : content.includes('\t') ? '\t' : ',';
+  const cells = content.split(delimiter);
+  const columns = cells.map(classifyTraceColumn);
+  const fail = (column: number, detail: string): never => {
+    throw new ImportError(NAME, detail, { line, column });
+  };
+  const unitless = columns.findIndex((c) => c.role === 'unitless');
+  if (unitless >= 0) {
+    const c = columns[unitless] as { quantity: string };
+    fail(unitless + 1, `header "${cells[unitless].trim()}" names a ${c.quantity} without a known unit (e.g. frequency_hz, "Level (dBm)")`);
+  }
+  for (const role of ['frequency', 'level', 'rbw'] as const) {
+    const at = columns.flatMap((c, index) => (c.role === role ? [index + 1] : []));
+    if (at.length > 1) fail(at[1], `columns ${at.join(' and ')} both look like ${role} columns; keep one`);
+  }
+  if (!Number.isNaN(parseCsvNumber(cells[0], delimiter !== ','))) {
+    fail(1, 'the first row is data; a header row such as "frequency_hz,level_dbm" is required');
+  }
+  if (!columns.some((c) => c.role === 'frequency')) fail(1, 'no frequency column (e.g. frequency_hz)');
+  if (!columns.some((c) => c.role === 'level')) fail(1, 'no level column (e.g. level_dbm)');
+  return { columns, delimiter, line };
+}

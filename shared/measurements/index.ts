@@ -1,0 +1,16 @@
+export { checkAudioResponse, ITU_R_M1173_AUDIO_RESPONSE } from './audio-response';
+export type { AudioResponsePoint, AudioResponseResult } from './audio-response';
+export { carrierSuppressionDb } from './carrier-suppression';
+export { checkSpurious } from './check-spurious';
+export type { SpuriousCheckResult, SpuriousEmission, SpuriousRow } from './check-spurious';
+export { frequencyErrorHz, frequencyErrorPpm } from './frequency-error';
+export { checkFrequencyTolerance } from './frequency-tolerance';
+export { imdRelativeDb } from './imd-relative';
+export { intermodProductFrequencies } from './intermod-product-frequencies';
+export { j3eCarrierFrequencyHz } from './j3e-carrier-frequency';
+export type { Sideband } from './j3e-carrier-frequency';
+export { spuriousLimitAbsoluteDbm, spuriousLimitDb } from './spurious-limit';
+export type { SpuriousCapRule } from './spurious-limit';
+export { TWO_TONE_TEST_PAIRS_47CFR_2_1049, twoToneTestPairFor } from './two-tone-test-tones';
+export type { TwoToneTestPair } from './two-tone-test-tones';
+export { imageFrequencyHz, unwantedSidebandSuppressionDb } from './unwanted-sideband-suppression';

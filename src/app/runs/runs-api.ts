@@ -1,0 +1,97 @@
+import { HttpClient, HttpParams } from '@angular/common/http';
+import { Injectable, inject } from '@angular/core';
+import type { Observable } from 'rxjs';
+import type { RunState } from '../../../shared/runs/run-state';
+import type { TestKind } from '../../../shared/rules/test-kind';
+import type { RuleSetBody } from '../../../shared/rules/rule-set';
+
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface RunRow {
+  id: string;
+  number: string;
+  state: RunState;
+  updatedAt: string;
+  planName: string;
+  manufacturer: string;
+  model: string;
+  serialNumber: string;
+  client: string;
+}
+
+export interface StoredResult {
+  id: string;
+  readingId: string;
+  engineVersion: string;
+  value: number | null;
+  unit: string;
+  limit: number | null;
+  marginDb: number | null;
+  expandedUncertainty: number | null;
+  coverageFactor: number | null;
+  verdict: string;
+  detail: Record<string, unknown>;
+  createdAt: string;
+}
+
+export interface RunCase {
+  id: string;
+  position: number;
+  kind: TestKind;
+  label: string;
+  parameters: { frequencyHz?: number; sideband?: string; powerLevel?: string | null };
+  reading: { id: string; values: Record<string, number | string | null>; createdAt: string } | null;
+  result: StoredResult | null;
+}
+
+export interface RunDetail {
+  id: string;
+  number: string;
+  state: RunState;
+  engineerId: string | null;
+  reviewerId: string | null;
+  returnReason: string | null;
+  plan: { id: string; name: string; ruleSet: RuleSetBody & { name?: string; version?: number } };
+  device: { id: string; manufacturer: string; model: string; serialNumber: string; emissionDesignator: string; ratedPepW: number };
+  client: { id: string; name: string; contactName: string; contactEmail: string };
+  testCases: RunCase[];
+}
+
+export interface SavedReading {
+  reading: { id: string; values: Record<string, unknown>; createdAt: string };
+  result: StoredResult | null;
+  problem: string | null;
+}
+
+/** Typed access to /api/runs. */
+@Injectable({ providedIn: 'root' })
+export class RunsApi {
+  private readonly http = inject(HttpClient);
+
+  list(query: { page?: number; pageSize?: number; sort?: string; state?: string; search?: string }): Observable<Page<RunRow>> {
+    let params = new HttpParams();
+    for (const [k, v] of Object.entries(query)) if (v !== undefined && v !== '') params = params.set(k, String(v));
+    return this.http.get<Page<RunRow>>('/api/runs', { params });
+  }
+
+  get(id: string): Observable<RunDetail> {
+    return this.http.get<RunDetail>(`/api/runs/${encodeURIComponent(id)}`);
+  }
+
+  create(planId: string): Observable<RunDetail> {
+    return this.http.post<RunDetail>('/api/runs', { planId });
+  }
+
+  saveReading(runId: string, caseId: string, values: Record<string, number | string | null>): Observable<SavedReading> {
+    return this.http.put<SavedReading>(`/api/runs/${encodeURIComponent(runId)}/cases/${encodeURIComponent(caseId)}/reading`, { values });
+  }
+
+  act(runId: string, action: 'submit' | 'approve' | 'return' | 'issue', reason?: string): Observable<unknown> {
+    return this.http.post(`/api/runs/${encodeURIComponent(runId)}/${action}`, reason ? { reason } : {});
+  }
+}
