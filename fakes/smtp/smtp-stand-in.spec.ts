@@ -3,6 +3,7 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import nodemailer from 'nodemailer';
+import type Mail from 'nodemailer/lib/mailer';
 import type { MessageDetailJson, MessageJson } from './message-json';
 import { startSmtpStandIn, type SmtpStandIn } from './start-smtp-stand-in';
 
@@ -18,7 +19,7 @@ describe('SMTP stand-in', () => {
   let standIn: SmtpStandIn;
   let api: string;
 
-  const send = (message: nodemailer.SendMailOptions) =>
+  const send = (message: Mail.Options) =>
     nodemailer
       .createTransport({
         host: '127.0.0.1',

@@ -5,7 +5,7 @@ import { parseSigmfMeta } from '../../shared/import/parse-sigmf-meta';
 import { parseWavHeader } from '../../shared/import/parse-wav-header';
 import { rawIqDatatype } from '../../shared/import/raw-iq-datatype';
 import type { SigmfDatatype } from '../../shared/import/sigmf-datatype';
-import { inputError, usageError } from './cli-error';
+import { inFile, inputError, usageError } from './cli-error';
 
 /** Where the samples of a recording are and how to decode them. */
 export interface IqSource {
@@ -41,7 +41,7 @@ export async function openIqSource(
   if (format === 'sigmf') return openSigmf(file);
   const { size } = await fs.stat(file);
   if (format === 'wav') {
-    const header = parseWavHeader(head, size);
+    const header = inFile(file, () => parseWavHeader(head, size));
     const { dataOffset, dataLengthBytes, datatype, sampleRateHz } = header;
     return { format, dataPath: file, datatype, sampleRateHz, dataOffset, dataLengthBytes, centerFrequencyHz: null };
   }
@@ -63,7 +63,8 @@ async function openSigmf(file: string): Promise<IqSource> {
   const base = file.replace(/\.sigmf-(meta|data)$/, '');
   const metaPath = `${base}.sigmf-meta`;
   const dataPath = `${base}.sigmf-data`;
-  const meta = parseSigmfMeta(await fs.readFile(metaPath, 'utf8'));
+  const metaText = await fs.readFile(metaPath, 'utf8');
+  const meta = inFile(metaPath, () => parseSigmfMeta(metaText));
   let size: number;
   try {
     size = (await fs.stat(dataPath)).size;

@@ -35,7 +35,7 @@ export async function buildReportDocument(input: {
       value: r?.value ?? null,
       unit: r?.unit ?? '',
       limit: (r?.detail as { limitText?: string } | undefined)?.limitText ?? '',
-      marginDb: r?.marginDb ?? null,
+      marginDb: r?.margin ?? null,
       expandedUncertainty: r?.expandedUncertainty ?? null,
       coverageFactor: r?.coverageFactor ?? null,
       verdict: (r?.verdict as ReportResult['verdict']) ?? 'not-evaluated',

@@ -24,7 +24,7 @@ export function presentResult(r: Result) {
     value: r.value,
     unit: r.unit,
     limit: r.limitValue,
-    marginDb: r.marginDb,
+    margin: r.margin,
     expandedUncertainty: r.expandedUncertainty,
     coverageFactor: r.coverageFactor,
     verdict: r.verdict,

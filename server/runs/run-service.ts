@@ -84,7 +84,7 @@ export async function saveReading(ctx: RouteContext, run: TestRun, caseId: strin
       value: r.value,
       unit: r.unit,
       limitValue: r.limit,
-      marginDb: r.marginDb,
+      margin: r.margin,
       expandedUncertainty: r.uncertainty.expanded,
       coverageFactor: r.uncertainty.coverageFactor,
       verdict: r.verdict,

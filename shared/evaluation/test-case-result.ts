@@ -12,8 +12,8 @@ export interface TestCaseResult {
   /** How the limit reads in a report, e.g. "at least 40 dB below PEP". */
   limitText: string;
   direction: 'at-least' | 'at-most';
-  /** Positive = inside the limit. */
-  marginDb: number;
+  /** Distance from the limit in the value's unit (dB or Hz); positive = inside the limit. */
+  margin: number;
   uncertainty: UncertaintyResult;
   verdict: Verdict;
   decisionRuleText: string;

@@ -33,7 +33,8 @@ export const AVIATION_SSB_AIRCRAFT_MASK_87_139C: EmissionMask = Object.freeze({
     status: 'from-memory' as const,
     notes: Object.freeze([
       'Relative to PEP; offsets from the assigned frequency, which is the carrier + 1400 Hz.',
-      '"Up to and including": exactly 4.5 kHz is in the 30 dB region, exactly 7.5 kHz in the 38 dB region.',
+      '"Up to and including": exactly 4.5 kHz is in the 30 dB region, ' +
+        'exactly 7.5 kHz in the 38 dB region.',
       'Numbers recalled, not checked against the text: verify against the current edition.',
     ]),
   }),
@@ -47,5 +48,6 @@ export const AVIATION_SSB_AIRCRAFT_MASK_87_139C: EmissionMask = Object.freeze({
  * @example aviationAssignedFrequencyHz(8_891_000); // 8892400
  */
 export function aviationAssignedFrequencyHz(carrierHz: number): number {
-  return requireFinite('aviationAssignedFrequencyHz', 'carrierHz', carrierHz) + AVIATION_ASSIGNED_FREQUENCY_OFFSET_HZ;
+  const carrier = requireFinite('aviationAssignedFrequencyHz', 'carrierHz', carrierHz);
+  return carrier + AVIATION_ASSIGNED_FREQUENCY_OFFSET_HZ;
 }

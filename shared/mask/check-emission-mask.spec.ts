@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { checkEmissionMask } from './check-emission-mask';
 import type { EmissionMask, MaskVertex } from './emission-mask';
+import type { MaskTrace } from './mask-check-result';
 import { maritimeMask80211 } from './maritime-mask-80-211';
 
 function mulberry32(seed: number): () => number {
@@ -34,7 +35,13 @@ function naiveLimitDb(vertices: readonly MaskVertex[], a: number): number {
   throw new Error('unreachable');
 }
 
-function naiveCheck(f: ArrayLike<number>, level: ArrayLike<number>, mask: EmissionMask, c: number, ref: number) {
+function naiveCheck(
+  f: ArrayLike<number>,
+  level: ArrayLike<number>,
+  mask: EmissionMask,
+  c: number,
+  ref: number,
+) {
   let worst = Infinity;
   let worstIndex = -1;
   let count = 0;
@@ -99,7 +106,8 @@ describe('checkEmissionMask', () => {
   };
 
   it('computes margin = limit − level and the worst point', () => {
-    // limits (common practice reading of the mask): 0 dB inside 1 kHz, −20 dB at 1.5 kHz, −40 dB beyond 2 kHz
+    // limits (common practice reading of the mask): 0 dB inside 1 kHz, −20 dB at 1.5 kHz,
+    // −40 dB beyond 2 kHz
     const r = checkEmissionMask(
       { frequencyHz: [-1500, 0, 1500, 3000], levelDbm: [-25, -10, -21, -60] },
       simple,
@@ -170,7 +178,10 @@ describe('checkEmissionMask', () => {
     expect(cw.correctionDb).toBe(0);
     expect(cw.worstMarginDb).toBe(20);
     // noise-like but no reference bandwidth: nothing to correct to
-    expect(checkEmissionMask(trace, simple, { centerHz: 0, referenceDbm: 0, noiseLike: true }).correctionDb).toBe(0);
+    expect(
+      checkEmissionMask(trace, simple, { centerHz: 0, referenceDbm: 0, noiseLike: true })
+        .correctionDb,
+    ).toBe(0);
   });
 
   it('skips the exempt band and counts only compared points', () => {
@@ -193,9 +204,12 @@ describe('checkEmissionMask', () => {
     const l = [-3, -12, -30, -45];
     const opts = { centerHz: 0, referenceDbm: 0 };
     const a = checkEmissionMask({ frequencyHz: f, levelDbm: l }, simple, opts);
-    const b = checkEmissionMask({ frequencyHz: Float64Array.from(f), levelDbm: Float64Array.from(l) }, simple, opts);
+    const typed = { frequencyHz: Float64Array.from(f), levelDbm: Float64Array.from(l) };
+    const b = checkEmissionMask(typed, simple, opts);
     expect(b).toEqual(a);
-    expect(checkEmissionMask({ frequencyHz: [0], levelDbm: [-1] }, simple, opts).worstMarginDb).toBe(1);
+    expect(
+      checkEmissionMask({ frequencyHz: [0], levelDbm: [-1] }, simple, opts).worstMarginDb,
+    ).toBe(1);
   });
 
   it('takes the lowest index on a tie', () => {
@@ -211,11 +225,21 @@ describe('checkEmissionMask', () => {
     ['mismatched lengths', { frequencyHz: [1, 2], levelDbm: [1] }, {}, /lengths differ/],
     ['a descending trace', { frequencyHz: [2, 1], levelDbm: [0, 0] }, {}, /ascending \(index 1\)/],
     ['a NaN frequency', { frequencyHz: [1, NaN], levelDbm: [0, 0] }, {}, /ascending/],
-    ['an infinite frequency', { frequencyHz: [1, Infinity], levelDbm: [0, 0] }, {}, /finite and ascending/],
+    [
+      'an infinite frequency',
+      { frequencyHz: [1, Infinity], levelDbm: [0, 0] },
+      {},
+      /finite and ascending/,
+    ],
     ['a NaN level', { frequencyHz: [1, 2], levelDbm: [0, NaN] }, {}, /levelDbm\[1\]/],
     ['a +Infinity level', { frequencyHz: [1], levelDbm: [Infinity] }, {}, /levelDbm\[0\]/],
     ['a non-finite centre', { frequencyHz: [1], levelDbm: [0] }, { centerHz: NaN }, /centerHz/],
-    ['a non-finite reference', { frequencyHz: [1], levelDbm: [0] }, { referenceDbm: Infinity }, /referenceDbm/],
+    [
+      'a non-finite reference',
+      { frequencyHz: [1], levelDbm: [0] },
+      { referenceDbm: Infinity },
+      /referenceDbm/,
+    ],
     [
       'noise-like without RBW',
       { frequencyHz: [1], levelDbm: [0] },
@@ -235,15 +259,12 @@ describe('checkEmissionMask', () => {
 
   it('throws when every point is exempt, and on non-arrays', () => {
     const mask = maritimeMask80211({ authorizedBandwidthHz: 3000, meanPowerW: 100 });
-    expect(() => checkEmissionMask({ frequencyHz: [0], levelDbm: [0] }, mask, { centerHz: 0, referenceDbm: 0 })).toThrow(
+    const opts = { centerHz: 0, referenceDbm: 0 };
+    expect(() => checkEmissionMask({ frequencyHz: [0], levelDbm: [0] }, mask, opts)).toThrow(
       /no trace point lies outside the exempt band/,
     );
-    expect(() =>
-      checkEmissionMask({ frequencyHz: null, levelDbm: [] } as unknown as { frequencyHz: number[]; levelDbm: number[] }, simple, {
-        centerHz: 0,
-        referenceDbm: 0,
-      }),
-    ).toThrow(TypeError);
+    const broken = { frequencyHz: null, levelDbm: [] } as unknown as MaskTrace;
+    expect(() => checkEmissionMask(broken, simple, opts)).toThrow(TypeError);
   });
 
   it('gives the same margins for a trace and its mirror image about the centre (property, seeded)', () => {
@@ -259,13 +280,16 @@ describe('checkEmissionMask', () => {
     };
     fc.assert(
       fc.property(
-        fc.array(fc.tuple(fc.integer({ min: -40_000, max: 40_000 }), fc.double({ min: -120, max: 10, noNaN: true })), {
-          minLength: 1,
-          maxLength: 60,
-        }),
+        fc.array(
+          fc.tuple(
+            fc.integer({ min: -40_000, max: 40_000 }),
+            fc.double({ min: -120, max: 10, noNaN: true }),
+          ),
+          { minLength: 1, maxLength: 60 },
+        ),
         (points) => {
           const c = 7_100_000;
-          // quarter-hertz offsets keep c ± offset exact, so a mirrored point has exactly the same |offset|
+          // quarter-hertz offsets keep c ± offset exact: a mirrored point has the same |offset|
           const sorted = [...points].sort((p, q) => p[0] - q[0]);
           const f = sorted.map(([o]) => c + o / 4);
           const l = sorted.map(([, level]) => level);
@@ -276,9 +300,11 @@ describe('checkEmissionMask', () => {
           const m = checkEmissionMask({ frequencyHz: fm, levelDbm: lm }, mask, opts);
           expect(m.worstMarginDb).toBe(r.worstMarginDb);
           expect(m.pointCount).toBe(r.pointCount);
-          expect(m.segments.map((s) => s.worstMarginDb)).toEqual(r.segments.map((s) => s.worstMarginDb));
+          expect(m.segments.map((s) => s.worstMarginDb)).toEqual(
+            r.segments.map((s) => s.worstMarginDb),
+          );
           expect(m.segments.map((s) => s.pointCount)).toEqual(r.segments.map((s) => s.pointCount));
-          // the mirrored worst point, moved back to the original side, is as bad as the original worst
+          // the mirrored worst point, moved back to the original side, is as bad as the worst
           // (ties may pick a different point of equal margin)
           const back = checkEmissionMask(
             { frequencyHz: [2 * c - m.worstFrequencyHz], levelDbm: [lm[m.worstIndex]] },
@@ -307,7 +333,8 @@ describe('checkEmissionMask', () => {
         l[k] = shape + (rand() * 6 - 3);
       }
       const mask = maritimeMask80211({ authorizedBandwidthHz: 3000, meanPowerW: 100 });
-      const r = checkEmissionMask({ frequencyHz: f, levelDbm: l }, mask, { centerHz: c, referenceDbm: 50 });
+      const opts = { centerHz: c, referenceDbm: 50 };
+      const r = checkEmissionMask({ frequencyHz: f, levelDbm: l }, mask, opts);
       const naive = naiveCheck(f, l, mask, c, 50);
       expect(r.pointCount).toBe(naive.count);
       expect(r.worstIndex).toBe(naive.worstIndex);
@@ -347,14 +374,16 @@ describe('checkEmissionMask', () => {
           [20_000, -55], // a step up: the outer, less stringent value holds at 20 kHz
         ],
       };
-      const r = checkEmissionMask({ frequencyHz: f, levelDbm: l }, mask, { centerHz: c, referenceDbm: 37 });
+      const opts = { centerHz: c, referenceDbm: 37 };
+      const r = checkEmissionMask({ frequencyHz: f, levelDbm: l }, mask, opts);
       const naive = naiveCheck(f, l, mask, c, 37);
       expect(r.pointCount).toBe(naive.count);
       expect(r.worstIndex).toBe(naive.worstIndex);
       expect(r.worstMarginDb).toBeCloseTo(naive.worst, 9);
       expect(r.segments.reduce((sum, s) => sum + s.pointCount, 0)).toBe(naive.count);
       expectSegmentsMatchNaive(r, f, mask, c, naive.margins);
-      const segmentWorst = Math.min(...r.segments.filter((s) => s.pointCount > 0).map((s) => s.worstMarginDb));
+      const filled = r.segments.filter((s) => s.pointCount > 0);
+      const segmentWorst = Math.min(...filled.map((s) => s.worstMarginDb));
       expect(segmentWorst).toBe(r.worstMarginDb);
     });
   });

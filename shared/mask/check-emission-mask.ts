@@ -38,7 +38,9 @@ export function checkEmissionMask(
   const f = requireArrayLike(FN, 'trace.frequencyHz', trace?.frequencyHz);
   const level = requireArrayLike(FN, 'trace.levelDbm', trace.levelDbm);
   if (f.length !== level.length) {
-    throw new RangeError(`${FN}: frequencyHz and levelDbm lengths differ (${f.length} vs ${level.length})`);
+    throw new RangeError(
+      `${FN}: frequencyHz and levelDbm lengths differ (${f.length} vs ${level.length})`,
+    );
   }
   if (f.length === 0) throw new RangeError(`${FN}: the trace is empty`);
   const compiled = compileEmissionMask(FN, mask);
@@ -47,7 +49,9 @@ export function checkEmissionMask(
 
   let correctionDb = 0;
   if (options.noiseLike === true && options.referenceBandwidthHz !== undefined) {
-    if (trace.rbwHz === undefined) throw new RangeError(`${FN}: noise-like correction needs trace.rbwHz`);
+    if (trace.rbwHz === undefined) {
+      throw new RangeError(`${FN}: noise-like correction needs trace.rbwHz`);
+    }
     correctionDb = noiseBandwidthCorrectionDb(options.referenceBandwidthHz, trace.rbwHz);
   }
 

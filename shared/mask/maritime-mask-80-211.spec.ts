@@ -1,4 +1,7 @@
-import { AVIATION_SSB_AIRCRAFT_MASK_87_139C, aviationAssignedFrequencyHz } from './aviation-mask-87-139';
+import {
+  AVIATION_SSB_AIRCRAFT_MASK_87_139C,
+  aviationAssignedFrequencyHz,
+} from './aviation-mask-87-139';
 import { checkEmissionMask } from './check-emission-mask';
 import { maritimeMask80211 } from './maritime-mask-80-211';
 import { maskLimitAtOffset } from './mask-limit-at-offset';
@@ -33,7 +36,11 @@ describe('maritimeMask80211 (47 CFR 80.211(a), published)', () => {
   });
 
   it('uses 25 dB for equipment installed before 1 February 1992', () => {
-    const old = maritimeMask80211({ authorizedBandwidthHz: 3000, meanPowerW: 100, installedBefore1992: true });
+    const old = maritimeMask80211({
+      authorizedBandwidthHz: 3000,
+      meanPowerW: 100,
+      installedBefore1992: true,
+    });
     expect(maskLimitAtOffset(old, 3000)).toBe(-25);
     expect(old.provenance?.notes.join(' ')).toMatch(/25 dB/);
   });
@@ -55,13 +62,22 @@ describe('maritimeMask80211 (47 CFR 80.211(a), published)', () => {
   it('records provenance and an edition', () => {
     expect(mask.provenance?.source).toBe('47 CFR 80.211(a)');
     expect(mask.provenance?.status).toBe('published');
-    expect(maritimeMask80211({ authorizedBandwidthHz: 3000, meanPowerW: 1, edition: '2024' }).provenance?.edition).toBe('2024');
+    expect(
+      maritimeMask80211({ authorizedBandwidthHz: 3000, meanPowerW: 1, edition: '2024' })
+        .provenance?.edition,
+    ).toBe('2024');
   });
 
   it('throws with the function name', () => {
-    expect(() => maritimeMask80211({ authorizedBandwidthHz: 0, meanPowerW: 1 })).toThrow(/^maritimeMask80211: /);
-    expect(() => maritimeMask80211({ authorizedBandwidthHz: 3000, meanPowerW: 0 })).toThrow(/meanPowerW/);
-    expect(() => maritimeMask80211({ authorizedBandwidthHz: 3000, meanPowerW: NaN })).toThrow(RangeError);
+    expect(() => maritimeMask80211({ authorizedBandwidthHz: 0, meanPowerW: 1 })).toThrow(
+      /^maritimeMask80211: /,
+    );
+    expect(() => maritimeMask80211({ authorizedBandwidthHz: 3000, meanPowerW: 0 })).toThrow(
+      /meanPowerW/,
+    );
+    expect(() => maritimeMask80211({ authorizedBandwidthHz: 3000, meanPowerW: NaN })).toThrow(
+      RangeError,
+    );
   });
 });
 

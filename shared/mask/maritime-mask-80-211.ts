@@ -1,5 +1,5 @@
 import { spuriousLimitDb } from '../measurements/spurious-limit';
-import { requireFinite, requirePositive } from '../units/number-guards';
+import { requirePositive } from '../units/number-guards';
 import type { EmissionMask } from './emission-mask';
 
 /**
@@ -31,8 +31,7 @@ export function maritimeMask80211(rule: {
 }): EmissionMask {
   const fn = 'maritimeMask80211';
   const bw = requirePositive(fn, 'authorizedBandwidthHz', rule.authorizedBandwidthHz);
-  const meanPowerW = requireFinite(fn, 'meanPowerW', rule.meanPowerW);
-  if (!(meanPowerW > 0)) throw new RangeError(`${fn}: meanPowerW must be greater than 0`);
+  const meanPowerW = requirePositive(fn, 'meanPowerW', rule.meanPowerW);
   const nearDb = rule.installedBefore1992 === true ? 25 : 28;
   const farDb = spuriousLimitDb({ meanPowerW });
   return {
@@ -54,8 +53,10 @@ export function maritimeMask80211(rule: {
       status: 'published',
       notes: [
         'Relative to mean power; offsets from the assigned frequency in % of authorized bandwidth.',
-        `Authorized bandwidth ${bw} Hz; mean power ${meanPowerW} W; beyond 250 %: ${farDb.toFixed(2)} dB.`,
-        '"Up to and including": exactly 150 % is in the 28 dB region, exactly 250 % in the 35 dB region.',
+        `Authorized bandwidth ${bw} Hz; mean power ${meanPowerW} W; ` +
+          `beyond 250 %: ${farDb.toFixed(2)} dB.`,
+        '"Up to and including": exactly 150 % is in the 28 dB region, ' +
+          'exactly 250 % in the 35 dB region.',
         rule.installedBefore1992 === true
           ? 'Installed before 1 February 1992: 25 dB applies from 50 % to 150 %.'
           : 'Installed on or after 1 February 1992: 28 dB applies from 50 % to 150 %.',

@@ -83,13 +83,19 @@ describe('maskLimitAtOffset', () => {
     ['a positive limit', { reference: 'pep', vertices: [[0, 1]] }, /relDb must be finite and ≤ 0/],
     ['a negative offset', { reference: 'pep', vertices: [[-1, 0]] }, /offset must be finite/],
     ['decreasing offsets', { reference: 'pep', vertices: [[2, 0], [1, -1]] }, /below the previous/],
-    ['three at one offset', { reference: 'pep', vertices: [[1, 0], [1, -1], [1, -2]] }, /more than two/],
+    [
+      'three at one offset',
+      { reference: 'pep', vertices: [[1, 0], [1, -1], [1, -2]] },
+      /more than two/,
+    ],
     ['a step at 0', { reference: 'pep', vertices: [[0, 0], [0, -5]] }, /step at offset 0/],
     ['a bad reference', { reference: 'carrier', vertices: [[0, 0]] }, /reference must be/],
     ['NaN limit', { reference: 'pep', vertices: [[0, NaN]] }, /relDb/],
   ])('throws on %s', (_, mask, message) => {
     expect(() => maskLimitAtOffset(mask as unknown as EmissionMask, 0)).toThrow(message);
-    expect(() => maskLimitAtOffset(mask as unknown as EmissionMask, 0)).toThrow(/^maskLimitAtOffset: /);
+    expect(() => maskLimitAtOffset(mask as unknown as EmissionMask, 0)).toThrow(
+      /^maskLimitAtOffset: /,
+    );
   });
 
   it('throws on a non-finite offset and a malformed mask', () => {

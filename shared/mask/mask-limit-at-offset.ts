@@ -21,7 +21,9 @@ import type { EmissionMask } from './emission-mask';
 export function maskLimitAtOffset(mask: EmissionMask, offsetHz: number): number {
   const fn = 'maskLimitAtOffset';
   const offset = requireNumber(fn, 'offsetHz', offsetHz);
-  if (!Number.isFinite(offset)) throw new RangeError(`${fn}: offsetHz must be finite, got ${offset}`);
+  if (!Number.isFinite(offset)) {
+    throw new RangeError(`${fn}: offsetHz must be finite, got ${offset}`);
+  }
   const compiled = compileEmissionMask(fn, mask);
   const a = Math.abs(offset);
   let s = 0;

@@ -56,7 +56,9 @@ export function walkMaskSide(
       segN = 0;
     }
     const l = level[i];
-    if (!(l < Infinity)) throw new RangeError(`${fnName}: levelDbm[${i}] must be a number below +Infinity`);
+    if (!(l < Infinity)) {
+      throw new RangeError(`${fnName}: levelDbm[${i}] must be a number below +Infinity`);
+    }
     const fromDb = startDb[s];
     const toDb = endDb[s];
     let limitDb = fromDb;

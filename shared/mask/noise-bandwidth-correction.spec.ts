@@ -11,7 +11,9 @@ describe('noiseBandwidthCorrectionDb (noise-like emissions scale as 10·log10(B2
   });
 
   it('throws on non-positive or non-finite bandwidths', () => {
-    expect(() => noiseBandwidthCorrectionDb(0, 300)).toThrow(/^noiseBandwidthCorrectionDb: referenceBandwidthHz/);
+    expect(() => noiseBandwidthCorrectionDb(0, 300)).toThrow(
+      /^noiseBandwidthCorrectionDb: referenceBandwidthHz/,
+    );
     expect(() => noiseBandwidthCorrectionDb(4000, -1)).toThrow(/rbwHz/);
     expect(() => noiseBandwidthCorrectionDb(NaN, 300)).toThrow(RangeError);
   });

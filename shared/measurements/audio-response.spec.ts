@@ -4,7 +4,9 @@ describe('checkAudioResponse (ITU-R M.1173 §3: 350–2700 Hz, 6 dB total variat
   const band = ITU_R_M1173_AUDIO_RESPONSE;
 
   it('holds the published passband and variation', () => {
-    expect([band.passbandLowHz, band.passbandHighHz, band.permittedVariationDb]).toEqual([350, 2700, 6]);
+    expect([band.passbandLowHz, band.passbandHighHz, band.permittedVariationDb]).toEqual(
+      [350, 2700, 6],
+    );
   });
 
   it('passes a response with 4 dB variation, ignoring points outside the band', () => {

@@ -10,7 +10,8 @@ import { requireFinite, requireNonNegative } from '../units/number-guards';
  * Units: Hz. Domain: errorHz finite (either sign), toleranceHz ≥ 0.
  * Bad input: RangeError starting with the function name.
  *
- * @example checkFrequencyTolerance({ errorHz: -12, toleranceHz: 20 }); // { pass: true, marginHz: 8, absoluteErrorHz: 12 }
+ * @example checkFrequencyTolerance({ errorHz: -12, toleranceHz: 20 });
+ * // { pass: true, marginHz: 8, absoluteErrorHz: 12 }
  */
 export function checkFrequencyTolerance(check: { errorHz: number; toleranceHz: number }): {
   pass: boolean;

@@ -14,7 +14,8 @@ import { requireFinite, requireLevelDb } from '../units/number-guards';
  * Domain: toneDbm and pepDbm finite; productDbm below +Infinity.
  * Bad input: RangeError starting with the function name.
  *
- * @example imdRelativeDb({ productDbm: 15, toneDbm: 40 }); // { belowToneDb: 25, belowPepDb: 31.0206 }
+ * @example imdRelativeDb({ productDbm: 15, toneDbm: 40 });
+ * // { belowToneDb: 25, belowPepDb: 31.0206 }
  */
 export function imdRelativeDb(levels: { productDbm: number; toneDbm: number; pepDbm?: number }): {
   belowToneDb: number;

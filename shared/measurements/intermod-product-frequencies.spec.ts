@@ -29,9 +29,8 @@ describe('intermodProductFrequencies', () => {
       lowerHz: 500,
       upperHz: 2300,
     });
-    expect(intermodProductFrequencies({ tone1Hz: 2_183_100, tone2Hz: 2_183_700, order: 3 })).toEqual(
-      { lowerHz: 2_182_500, upperHz: 2_184_300 },
-    );
+    const rf = intermodProductFrequencies({ tone1Hz: 2_183_100, tone2Hz: 2_183_700, order: 3 });
+    expect(rf).toEqual({ lowerHz: 2_182_500, upperHz: 2_184_300 });
   });
 
   it('throws on equal tones, a bad order or non-finite tones', () => {

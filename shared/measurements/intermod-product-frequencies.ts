@@ -11,7 +11,8 @@ import { requireFinite } from '../units/number-guards';
  * Units: Hz. Domain: finite, unequal tones (their order does not matter); order 3 or 5.
  * Bad input: RangeError starting with the function name.
  *
- * @example intermodProductFrequencies({ tone1Hz: 1100, tone2Hz: 1700, order: 3 }); // { lowerHz: 500, upperHz: 2300 }
+ * @example intermodProductFrequencies({ tone1Hz: 1100, tone2Hz: 1700, order: 3 });
+ * // { lowerHz: 500, upperHz: 2300 }
  */
 export function intermodProductFrequencies(test: {
   tone1Hz: number;

@@ -12,7 +12,8 @@ export type Sideband = 'usb' | 'lsb';
  * Units: Hz. Domain: rfToneHz finite, audioToneHz > 0; sideband 'usb' or 'lsb'.
  * Bad input: RangeError starting with the function name.
  *
- * @example j3eCarrierFrequencyHz({ rfToneHz: 2_183_000, audioToneHz: 1000, sideband: 'usb' }); // 2182000
+ * @example j3eCarrierFrequencyHz({ rfToneHz: 2_183_000, audioToneHz: 1000, sideband: 'usb' });
+ * // 2182000
  */
 export function j3eCarrierFrequencyHz(reading: {
   rfToneHz: number;

@@ -27,7 +27,8 @@ export const TWO_TONE_TEST_PAIRS_47CFR_2_1049: readonly TwoToneTestPair[] = Obje
  * Domain: authorizedBandwidthHz > 0. Bad input or a bandwidth the rule does not list →
  * RangeError starting with the function name (listing the bandwidths it does cover).
  *
- * @example twoToneTestPairFor(3000); // { authorizedBandwidthHz: 3000, tone1Hz: 400, tone2Hz: 1800 }
+ * @example twoToneTestPairFor(3000);
+ * // { authorizedBandwidthHz: 3000, tone1Hz: 400, tone2Hz: 1800 }
  */
 export function twoToneTestPairFor(authorizedBandwidthHz: number): TwoToneTestPair {
   const bw = requirePositive('twoToneTestPairFor', 'authorizedBandwidthHz', authorizedBandwidthHz);

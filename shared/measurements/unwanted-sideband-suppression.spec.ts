@@ -25,7 +25,9 @@ describe('unwanted-sideband suppression (single-tone method, common practice)', 
   });
 
   it('throws with the function name', () => {
-    expect(() => unwantedSidebandSuppressionDb({ wantedToneDbm: Infinity, imageToneDbm: 0 })).toThrow(
+    expect(() =>
+      unwantedSidebandSuppressionDb({ wantedToneDbm: Infinity, imageToneDbm: 0 }),
+    ).toThrow(
       /^unwantedSidebandSuppressionDb: wantedToneDbm/,
     );
     expect(() => unwantedSidebandSuppressionDb({ wantedToneDbm: 0, imageToneDbm: NaN })).toThrow(

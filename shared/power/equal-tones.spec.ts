@@ -23,7 +23,8 @@ describe('two-tone and n-tone relations', () => {
   });
 
   it.each([
-    // [n, mean above tone dB = 10·log10(n), PEP above tone dB = 20·log10(n)] — published mean = n·Pt, PEP = n²·Pt
+    // [n, mean above tone = 10·log10(n) dB, PEP above tone = 20·log10(n) dB]
+    // published: mean = n·Pt, PEP = n²·Pt
     [1, 0, 0],
     [2, 3.0103, 6.0206],
     [3, 4.7712, 9.5424],

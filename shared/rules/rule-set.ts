@@ -4,7 +4,7 @@
  * changes a test already done with it.
  */
 import type { DecisionRule } from '../uncertainty/decision-rule';
-import type { UncertaintyContribution } from '../uncertainty/combine-uncertainty';
+import type { UncertaintyContribution } from '../uncertainty/uncertainty-contribution';
 
 export interface DocumentReference {
   document: string; // e.g. "47 CFR 80.207(c)"
@@ -48,5 +48,14 @@ export interface RuleSetBody {
     audioResponse?: LimitSource & { lowHz: number; highHz: number; maxVariationDb: number };
   };
   /** Default uncertainty budgets; instruments add their own contributions. */
-  uncertainty: { relative: UncertaintyContribution[]; absolute: UncertaintyContribution[] };
+  uncertainty: {
+    /** dB quantities read relative to another level in the same sweep (dBc, dB below PEP). */
+    relative: UncertaintyContribution[];
+    /** Absolute levels (dBm). */
+    absolute: UncertaintyContribution[];
+    /** Frequency readings, in Hz (counter resolution, timebase). */
+    frequencyHz?: UncertaintyContribution[];
+    /** Bandwidths read from a trace, in Hz (bin spacing, RBW shape). */
+    bandwidthHz?: UncertaintyContribution[];
+  };
 }

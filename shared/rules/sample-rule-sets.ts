@@ -4,6 +4,7 @@
  * the standard before it tests against it, then copy the sample into a rule set of its own.
  */
 import type { RuleSetBody } from './rule-set';
+import type { UncertaintyContribution } from '../uncertainty/uncertainty-contribution';
 
 const SAMPLE_NOTICE =
   'Sample rule set shipped with Sidecheck. Verify every limit against the current edition of each referenced document before use; copy it to make your own.';
@@ -20,6 +21,16 @@ const ABSOLUTE_BUDGET: RuleSetBody['uncertainty']['absolute'] = [
   { name: 'Attenuator and coupler calibration (example)', distribution: 'normal', value: 0.2, coverageFactor: 2 },
   { name: 'Repeatability (example)', distribution: 'normal', value: 0.2, coverageFactor: 2 },
 ];
+
+const FREQUENCY_BUDGET: UncertaintyContribution[] = [
+  { name: 'Counter resolution (example)', distribution: 'rectangular', value: 0.5 },
+  { name: 'Timebase, 0.05 ppm at 30 MHz (example)', distribution: 'rectangular', value: 1.5 },
+];
+const BANDWIDTH_BUDGET: UncertaintyContribution[] = [
+  { name: 'Trace bin spacing (example)', distribution: 'rectangular', value: 15 },
+  { name: 'Repeatability (example)', distribution: 'normal', value: 20, coverageFactor: 2 },
+];
+const BUDGETS = { relative: RELATIVE_BUDGET, absolute: ABSOLUTE_BUDGET, frequencyHz: FREQUENCY_BUDGET, bandwidthHz: BANDWIDTH_BUDGET };
 
 export interface SampleRuleSet {
   key: string;
@@ -67,7 +78,7 @@ export const SAMPLE_RULE_SETS: SampleRuleSet[] = [
         audioResponse: { lowHz: 350, highHz: 2700, maxVariationDb: 6, source: 'ITU-R M.1173 section 3' },
         occupiedBandwidth: { maxHz: 3000, source: 'Authorized bandwidth 3.0 kHz (47 CFR 80.205, from memory: verify)' },
       },
-      uncertainty: { relative: RELATIVE_BUDGET, absolute: ABSOLUTE_BUDGET },
+      uncertainty: BUDGETS,
     },
   },
   {
@@ -101,7 +112,7 @@ export const SAMPLE_RULE_SETS: SampleRuleSet[] = [
         },
         frequencyTolerance: { toleranceHz: 20, source: '47 CFR 87.133, aircraft (from memory: verify)' },
       },
-      uncertainty: { relative: RELATIVE_BUDGET, absolute: ABSOLUTE_BUDGET },
+      uncertainty: BUDGETS,
     },
   },
   {
@@ -118,7 +129,7 @@ export const SAMPLE_RULE_SETS: SampleRuleSet[] = [
         spurious: { baseDb: 43, reference: 'mean', referenceBandwidthHz: 10000, source: '47 CFR 97.307(d), 2024: at least 43 dB below mean power' },
         carrierSuppression: { minDbBelowPep: 40, source: 'Lab practice for J3E, example value (97.307 sets no number)' },
       },
-      uncertainty: { relative: RELATIVE_BUDGET, absolute: ABSOLUTE_BUDGET },
+      uncertainty: BUDGETS,
     },
   },
 ];

@@ -55,7 +55,7 @@ export function requireLevelDb(fnName: string, name: string, value: unknown): nu
   return n;
 }
 
-/** Throws a TypeError unless `value` is an array or typed array of numbers (length checked only). */
+/** Throws a TypeError unless `value` is an array or typed array (only its length is checked). */
 export function requireArrayLike(
   fnName: string,
   name: string,

@@ -198,7 +198,7 @@ const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
       value double precision,
       unit text NOT NULL,
       limit_value double precision,
-      margin_db double precision,
+      margin double precision,
       expanded_uncertainty double precision,
       coverage_factor double precision,
       verdict text NOT NULL,

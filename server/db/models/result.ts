@@ -11,7 +11,7 @@ export class Result extends Model<InferAttributes<Result>, InferCreationAttribut
   declare value: number | null;
   declare unit: string;
   declare limitValue: number | null;
-  declare marginDb: number | null;
+  declare margin: number | null;
   declare expandedUncertainty: number | null;
   declare coverageFactor: number | null;
   declare verdict: string;
@@ -30,7 +30,7 @@ export class Result extends Model<InferAttributes<Result>, InferCreationAttribut
         value: { type: DataTypes.DOUBLE },
         unit: { type: DataTypes.TEXT, allowNull: false },
         limitValue: { type: DataTypes.DOUBLE },
-        marginDb: { type: DataTypes.DOUBLE },
+        margin: { type: DataTypes.DOUBLE },
         expandedUncertainty: { type: DataTypes.DOUBLE },
         coverageFactor: { type: DataTypes.DOUBLE },
         verdict: { type: DataTypes.TEXT, allowNull: false },

@@ -31,7 +31,7 @@ export interface StoredResult {
   value: number | null;
   unit: string;
   limit: number | null;
-  marginDb: number | null;
+  margin: number | null;
   expandedUncertainty: number | null;
   coverageFactor: number | null;
   verdict: string;
