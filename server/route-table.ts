@@ -1,6 +1,8 @@
 /** Every API route of the product, in one table: the router mounts it and the access test walks it. */
 import type { Sequelize } from 'sequelize';
-import type { RouteDef } from './http/route';
+import { route, type RouteDef } from './http/route';
+import { buildOpenApi } from './http/openapi';
+import { ENGINE_VERSION } from '../shared/engine-version';
 import { authRoutes } from './auth/routes';
 import { clientRoutes } from './clients/routes';
 import { deviceRoutes } from './devices/routes';
@@ -20,7 +22,7 @@ export interface RouteTableDeps {
 }
 
 export function routeTable(deps: RouteTableDeps): RouteDef[] {
-  return [
+  const routes: RouteDef[] = [
     ...healthRoutes(deps.sequelize),
     ...authRoutes({ sequelize: deps.sequelize, tokens: deps.tokens, secureCookies: deps.secureCookies }),
     ...clientRoutes(),
@@ -30,4 +32,13 @@ export function routeTable(deps: RouteTableDeps): RouteDef[] {
     ...runRoutes(deps.sequelize),
     ...reportRoutes(deps.reports),
   ] as RouteDef[];
+  const openApi = route({
+    method: 'get',
+    path: '/openapi.json',
+    summary: 'This document: the OpenAPI 3.1 description of the API',
+    access: { kind: 'public' },
+    transaction: 'none',
+    handler: async () => buildOpenApi(routes, ENGINE_VERSION),
+  });
+  return [...routes, openApi as RouteDef];
 }

@@ -1,5 +1,10 @@
 import type { Address } from './api-objects';
-import { rejectUnknownParams, optionalNullableString, optionalObject, type FormBody } from './form-params';
+import {
+  rejectUnknownParams,
+  optionalNullableString,
+  optionalObject,
+  type FormBody,
+} from './form-params';
 
 const ADDRESS_FIELDS = ['city', 'country', 'line1', 'line2', 'postal_code', 'state'] as const;
 

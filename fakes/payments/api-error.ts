@@ -2,10 +2,7 @@ import type { Json, JsonObject } from './api-objects';
 
 /** Error types of the API's error object (`error.type`), as the SDK switches on them. */
 export type ApiErrorType =
-  | 'api_error'
-  | 'card_error'
-  | 'idempotency_error'
-  | 'invalid_request_error';
+  'api_error' | 'card_error' | 'idempotency_error' | 'invalid_request_error';
 
 /**
  * An expected API failure: HTTP status plus the body `{ error: { type, message, code, param,
@@ -18,7 +15,12 @@ export class ApiError extends Error {
     readonly status: number,
     readonly type: ApiErrorType,
     message: string,
-    readonly details: { code?: string; param?: string; decline_code?: string; extra?: JsonObject } = {},
+    readonly details: {
+      code?: string;
+      param?: string;
+      decline_code?: string;
+      extra?: JsonObject;
+    } = {},
   ) {
     super(message);
   }
@@ -53,10 +55,15 @@ export function missingParam(param: string): ApiError {
  * it came in a parameter (the real API's split, from memory).
  */
 export function noSuch(kind: string, id: string, options: { param?: string } = {}): ApiError {
-  return new ApiError(options.param ? 400 : 404, 'invalid_request_error', `No such ${kind}: '${id}'`, {
-    code: 'resource_missing',
-    param: options.param ?? 'id',
-  });
+  return new ApiError(
+    options.param ? 400 : 404,
+    'invalid_request_error',
+    `No such ${kind}: '${id}'`,
+    {
+      code: 'resource_missing',
+      param: options.param ?? 'id',
+    },
+  );
 }
 
 /** 401 with the message the API gives for a bad key; the key is masked but for its end. */

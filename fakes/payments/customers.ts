@@ -18,7 +18,15 @@ import type { PaymentsContext } from './payments-context';
 import { presentObject, requestExpand, requestParams } from './present-object';
 import { expandObject } from './expand-fields';
 
-const WRITABLE = ['address', 'description', 'email', 'metadata', 'name', 'phone', 'preferred_locales'];
+const WRITABLE = [
+  'address',
+  'description',
+  'email',
+  'metadata',
+  'name',
+  'phone',
+  'preferred_locales',
+];
 
 /**
  * Customers: `POST /v1/customers`, `GET /v1/customers/:id`, `POST /v1/customers/:id`,
@@ -69,7 +77,9 @@ export function customersRouter(context: PaymentsContext): Router {
   });
 
   router.get('/customers/:id', (request, response) => {
-    response.json(presentObject(context, request, findCustomer(context, String(request.params['id']))));
+    response.json(
+      presentObject(context, request, findCustomer(context, String(request.params['id']))),
+    );
   });
 
   router.post('/customers/:id', (request, response) => {
@@ -101,10 +111,17 @@ export function customersRouter(context: PaymentsContext): Router {
     const inRange = createdFilter(query);
     const matches = Object.values(store.state.customers)
       .reverse()
-      .filter((customer) => (email === undefined || customer.email === email) && inRange(customer.created));
+      .filter(
+        (customer) =>
+          (email === undefined || customer.email === email) && inRange(customer.created),
+      );
     const expand = requestExpand(request);
     response.json(
-      expandObject(store.state, listPage(matches, query, '/v1/customers', (customer) => customer), expand),
+      expandObject(
+        store.state,
+        listPage(matches, query, '/v1/customers', (customer) => customer),
+        expand,
+      ),
     );
   });
 
@@ -120,7 +137,8 @@ function findCustomer(context: PaymentsContext, id: string): Customer {
 /** Applies the writable parameters; '' unsets a field, metadata merges (API conventions). */
 function applyWritable(customer: Customer, body: FormBody): Customer {
   const email = optionalNullableString(body, 'email');
-  if (email && !isPlausibleEmail(email)) throw invalidParam('email', `Invalid email address: ${email}`, 'email_invalid');
+  if (email && !isPlausibleEmail(email))
+    throw invalidParam('email', `Invalid email address: ${email}`, 'email_invalid');
   for (const field of ['description', 'name', 'phone'] as const) {
     const value = optionalNullableString(body, field);
     if (value !== undefined) customer[field] = value;

@@ -19,7 +19,12 @@ export const unknownApiRoute: RequestHandler = (request) => {
  * `Stripe-Should-Retry: false` (a stand-in bug does not go away on retry, so the SDK must not
  * repeat the request).
  */
-export const apiErrorMiddleware: ErrorRequestHandler = (error: unknown, request, response, _next) => {
+export const apiErrorMiddleware: ErrorRequestHandler = (
+  error: unknown,
+  request,
+  response,
+  _next,
+) => {
   if (error instanceof ApiError) {
     response.status(error.status).json(error.toBody());
     return;
@@ -34,5 +39,11 @@ export const apiErrorMiddleware: ErrorRequestHandler = (error: unknown, request,
   response
     .status(500)
     .set('Stripe-Should-Retry', 'false')
-    .json(new ApiError(500, 'api_error', 'An unexpected error occurred in the payments stand-in.').toBody());
+    .json(
+      new ApiError(
+        500,
+        'api_error',
+        'An unexpected error occurred in the payments stand-in.',
+      ).toBody(),
+    );
 };

@@ -46,7 +46,10 @@ export function recordEvent(
     api_version: PAYMENTS_API_VERSION,
     created: unixNow(),
     data: previousAttributes
-      ? { object: structuredClone(object), previous_attributes: structuredClone(previousAttributes) }
+      ? {
+          object: structuredClone(object),
+          previous_attributes: structuredClone(previousAttributes),
+        }
       : { object: structuredClone(object) },
     livemode: false,
     pending_webhooks: context.webhookUrls.length,
@@ -56,7 +59,14 @@ export function recordEvent(
   state.events[event.id] = event;
   for (const url of context.webhookUrls) {
     const id = newObjectId('whdel');
-    state.deliveries[id] = { id, eventId: event.id, url, nextAttemptAt: Date.now(), deliveredAt: null, attempts: [] };
+    state.deliveries[id] = {
+      id,
+      eventId: event.id,
+      url,
+      nextAttemptAt: Date.now(),
+      deliveredAt: null,
+      attempts: [],
+    };
   }
   if (context.webhookUrls.length) context.wakeDelivery();
   return event;
@@ -70,7 +80,8 @@ export function recordEvent(
 export function changedAttributes(before: JsonObject, after: JsonObject): JsonObject {
   const changed: JsonObject = {};
   for (const key of Object.keys(after)) {
-    if (JSON.stringify(before[key]) !== JSON.stringify(after[key])) changed[key] = before[key] ?? null;
+    if (JSON.stringify(before[key]) !== JSON.stringify(after[key]))
+      changed[key] = before[key] ?? null;
   }
   return changed;
 }

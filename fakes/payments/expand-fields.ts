@@ -19,12 +19,19 @@ const MAX_EXPAND_DEPTH = 4;
  * @throws ApiError 400 for a path that is too deep or names a field that cannot be expanded.
  * @example expandObject(state, session, ['payment_intent']).payment_intent.object === 'payment_intent'
  */
-export function expandObject(state: PaymentsState, object: JsonObject, paths: readonly string[]): JsonObject {
+export function expandObject(
+  state: PaymentsState,
+  object: JsonObject,
+  paths: readonly string[],
+): JsonObject {
   const copy = structuredClone(object);
   for (const path of paths) {
     const segments = path.split('.');
     if (segments.length > MAX_EXPAND_DEPTH) {
-      throw invalidParam('expand', `You cannot expand more than ${MAX_EXPAND_DEPTH} levels of a property.`);
+      throw invalidParam(
+        'expand',
+        `You cannot expand more than ${MAX_EXPAND_DEPTH} levels of a property.`,
+      );
     }
     expandPath(state, copy, segments, path);
   }
@@ -41,7 +48,12 @@ export function lineItemsList(state: PaymentsState, sessionId: string): ListObje
   };
 }
 
-function expandPath(state: PaymentsState, node: JsonObject, segments: string[], path: string): void {
+function expandPath(
+  state: PaymentsState,
+  node: JsonObject,
+  segments: string[],
+  path: string,
+): void {
   const [field, ...rest] = segments;
   if (node['object'] === 'list' && field === 'data' && Array.isArray(node['data'])) {
     for (const item of node['data']) {
@@ -49,7 +61,11 @@ function expandPath(state: PaymentsState, node: JsonObject, segments: string[], 
     }
     return;
   }
-  if (field === 'line_items' && node['object'] === 'checkout.session' && typeof node['id'] === 'string') {
+  if (
+    field === 'line_items' &&
+    node['object'] === 'checkout.session' &&
+    typeof node['id'] === 'string'
+  ) {
     node[field] = lineItemsList(state, node['id']);
   } else if (typeof node[field] === 'string') {
     const found = lookUp(state, node[field]);

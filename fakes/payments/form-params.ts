@@ -30,7 +30,8 @@ export function rejectUnknownParams(body: FormBody, allowed: readonly string[], 
 export function optionalString(body: FormBody, key: string, param = key): string | undefined {
   const value = body[key];
   if (value === undefined) return undefined;
-  if (typeof value !== 'string') throw invalidParam(param, `Invalid string: ${JSON.stringify(value)}`);
+  if (typeof value !== 'string')
+    throw invalidParam(param, `Invalid string: ${JSON.stringify(value)}`);
   return value;
 }
 
@@ -42,7 +43,11 @@ export function requiredString(body: FormBody, key: string, param = key): string
 }
 
 /** A string parameter where '' means "unset" (the API's convention): '' → null. */
-export function optionalNullableString(body: FormBody, key: string, param = key): string | null | undefined {
+export function optionalNullableString(
+  body: FormBody,
+  key: string,
+  param = key,
+): string | null | undefined {
   const value = optionalString(body, key, param);
   return value === '' ? null : value;
 }
@@ -111,7 +116,11 @@ export function optionalArray(body: FormBody, key: string, param = key): unknown
   const value = body[key];
   if (value === undefined) return undefined;
   if (Array.isArray(value)) return value;
-  if (typeof value === 'object' && value !== null && Object.keys(value).every((k) => /^[0-9]+$/.test(k))) {
+  if (
+    typeof value === 'object' &&
+    value !== null &&
+    Object.keys(value).every((k) => /^[0-9]+$/.test(k))
+  ) {
     return Object.entries(value)
       .sort(([a], [b]) => Number(a) - Number(b))
       .map(([, item]) => item);

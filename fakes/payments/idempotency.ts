@@ -36,7 +36,11 @@ export function idempotency(store: PaymentsStore): RequestHandler {
       return;
     }
     if (inFlight.has(key)) {
-      throw new ApiError(409, 'idempotency_error', `There is currently another in-progress request using this Idempotent Key: ${key}.`);
+      throw new ApiError(
+        409,
+        'idempotency_error',
+        `There is currently another in-progress request using this Idempotent Key: ${key}.`,
+      );
     }
     inFlight.add(key);
     response.on('close', () => inFlight.delete(key));

@@ -26,7 +26,10 @@ export function readMetadata(body: FormBody, param = 'metadata'): Metadata | nul
   for (const [key, entry] of entries) {
     if (typeof entry !== 'string') throw invalidParam(`${param}[${key}]`, 'Invalid string');
     if (key.length > 40 || /[[\]]/.test(key)) {
-      throw invalidParam(`${param}[${key}]`, 'Metadata keys can have up to 40 characters and no brackets.');
+      throw invalidParam(
+        `${param}[${key}]`,
+        'Metadata keys can have up to 40 characters and no brackets.',
+      );
     }
     if (entry.length > 500) {
       throw invalidParam(`${param}[${key}]`, 'Metadata values can have up to 500 characters.');

@@ -1,14 +1,6 @@
-import type {
-  Charge,
-  CheckoutSession,
-  Customer,
-  JsonObject,
-  LineItem,
-  PaymentIntent,
-  Product,
-  Refund,
-  StripeEvent,
-} from './api-objects';
+import type { Customer, JsonObject, Metadata, StripeEvent } from './api-objects';
+import type { CheckoutSession, LineItem, Product } from './checkout-objects';
+import type { Charge, PaymentIntent, Refund } from './payment-objects';
 
 /** One attempt to deliver an event to one webhook endpoint. */
 export type DeliveryAttempt = {
@@ -52,6 +44,8 @@ export type PaymentsState = {
   checkoutSessions: Record<string, CheckoutSession>;
   /** Line items by Checkout Session id (served only on expansion or the line_items endpoint). */
   lineItems: Record<string, LineItem[]>;
+  /** `payment_intent_data` of each session, applied to the PaymentIntent made when paying. */
+  paymentIntentData: Record<string, { description: string | null; metadata: Metadata }>;
   paymentIntents: Record<string, PaymentIntent>;
   charges: Record<string, Charge>;
   refunds: Record<string, Refund>;
@@ -71,6 +65,7 @@ export function emptyPaymentsState(): PaymentsState {
     products: {},
     checkoutSessions: {},
     lineItems: {},
+    paymentIntentData: {},
     paymentIntents: {},
     charges: {},
     refunds: {},

@@ -15,7 +15,11 @@ import type { PaymentsContext } from './payments-context';
  * @throws ApiError 400 for an expansion that is not possible.
  * @example response.json(presentObject(context, request, customer))
  */
-export function presentObject(context: PaymentsContext, request: Request, object: JsonObject): JsonObject {
+export function presentObject(
+  context: PaymentsContext,
+  request: Request,
+  object: JsonObject,
+): JsonObject {
   return expandObject(context.store.state, object, requestExpand(request));
 }
 

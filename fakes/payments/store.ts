@@ -1,4 +1,12 @@
-import { closeSync, fsyncSync, mkdirSync, openSync, readFileSync, renameSync, writeSync } from 'node:fs';
+import {
+  closeSync,
+  fsyncSync,
+  mkdirSync,
+  openSync,
+  readFileSync,
+  renameSync,
+  writeSync,
+} from 'node:fs';
 import { randomBytes } from 'node:crypto';
 import { join } from 'node:path';
 import { emptyPaymentsState, type PaymentsState } from './payments-state';
@@ -36,7 +44,8 @@ export class PaymentsStore {
       throw error;
     }
     const parsed = JSON.parse(text) as PaymentsState;
-    if (parsed?.version !== 1) throw new Error(`PaymentsStore.open: ${filePath} is not a version 1 state file`);
+    if (parsed?.version !== 1)
+      throw new Error(`PaymentsStore.open: ${filePath} is not a version 1 state file`);
     return new PaymentsStore(filePath, { ...emptyPaymentsState(), ...parsed });
   }
 

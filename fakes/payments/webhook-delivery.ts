@@ -46,7 +46,10 @@ export class WebhookDeliveryWorker {
       const pending = this.deliveries().filter((delivery) => !delivery.deliveredAt);
       for (const delivery of pending) await this.attempt(delivery);
       this.scheduleNext();
-      return { attempted: pending.length, delivered: pending.filter((d) => this.find(d.id)?.deliveredAt).length };
+      return {
+        attempted: pending.length,
+        delivered: pending.filter((d) => this.find(d.id)?.deliveredAt).length,
+      };
     });
   }
 
@@ -71,13 +74,20 @@ export class WebhookDeliveryWorker {
   private scheduleAt(when: number): void {
     if (this.closed) return;
     clearTimeout(this.timer);
-    this.timer = setTimeout(() => void this.enqueue(() => this.runDue()), Math.max(0, when - Date.now()));
+    this.timer = setTimeout(
+      () => void this.enqueue(() => this.runDue()),
+      Math.max(0, when - Date.now()),
+    );
   }
 
   private async runDue(): Promise<void> {
     for (const delivery of this.deliveries()) {
       if (this.closed) return;
-      if (!delivery.deliveredAt && delivery.nextAttemptAt !== null && delivery.nextAttemptAt <= Date.now()) {
+      if (
+        !delivery.deliveredAt &&
+        delivery.nextAttemptAt !== null &&
+        delivery.nextAttemptAt <= Date.now()
+      ) {
         await this.attempt(delivery);
       }
     }
@@ -104,7 +114,11 @@ export class WebhookDeliveryWorker {
         body,
         {
           'Content-Type': 'application/json; charset=utf-8',
-          'Stripe-Signature': signatureHeader(body, this.settings.secret, Math.floor(started / 1000)),
+          'Stripe-Signature': signatureHeader(
+            body,
+            this.settings.secret,
+            Math.floor(started / 1000),
+          ),
           'User-Agent': 'sidecheck-payments-stand-in/1 (webhook delivery)',
         },
         { timeoutMs: this.settings.timeoutMs, signal: this.abort.signal },
@@ -113,7 +127,12 @@ export class WebhookDeliveryWorker {
       if (this.closed) return; // shutdown, not the endpoint's fault: stays pending for next start
       error = cause instanceof Error ? cause.message : String(cause);
     }
-    const record: DeliveryAttempt = { at: new Date(started).toISOString(), status, error, durationMs: Date.now() - started };
+    const record: DeliveryAttempt = {
+      at: new Date(started).toISOString(),
+      status,
+      error,
+      durationMs: Date.now() - started,
+    };
     this.store.mutate((state) => {
       const current = state.deliveries[delivery.id];
       if (!current) return; // reset while the attempt was in flight
@@ -125,8 +144,13 @@ export class WebhookDeliveryWorker {
         const stored = state.events[current.eventId];
         if (stored) stored.pending_webhooks = Math.max(0, stored.pending_webhooks - 1);
       } else if (!succeeded && !current.deliveredAt) {
-        const failures = current.attempts.filter((a) => a.status === null || a.status < 200 || a.status >= 300);
-        const delay = Math.min(this.settings.retryCapMs, this.settings.retryBaseMs * 2 ** (failures.length - 1));
+        const failures = current.attempts.filter(
+          (a) => a.status === null || a.status < 200 || a.status >= 300,
+        );
+        const delay = Math.min(
+          this.settings.retryCapMs,
+          this.settings.retryBaseMs * 2 ** (failures.length - 1),
+        );
         current.nextAttemptAt = Date.now() + delay;
       }
     });
@@ -134,7 +158,9 @@ export class WebhookDeliveryWorker {
 
   private enqueue<T>(task: () => Promise<T>): Promise<T> {
     const run = this.queue.then(task);
-    this.queue = run.catch((error: unknown) => console.error('[payments stand-in] webhook delivery failed', error));
+    this.queue = run.catch((error: unknown) =>
+      console.error('[payments stand-in] webhook delivery failed', error),
+    );
     return run;
   }
 

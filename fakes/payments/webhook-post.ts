@@ -29,7 +29,11 @@ export function postWebhook(
       {
         method: 'POST',
         agent: false,
-        headers: { ...headers, 'Content-Length': String(Buffer.byteLength(body)), Connection: 'close' },
+        headers: {
+          ...headers,
+          'Content-Length': String(Buffer.byteLength(body)),
+          Connection: 'close',
+        },
         timeout: options.timeoutMs,
         signal: options.signal,
       },
@@ -39,7 +43,9 @@ export function postWebhook(
         response.on('error', reject);
       },
     );
-    request.on('timeout', () => request.destroy(new Error(`no answer within ${options.timeoutMs} ms`)));
+    request.on('timeout', () =>
+      request.destroy(new Error(`no answer within ${options.timeoutMs} ms`)),
+    );
     request.on('error', reject);
     request.end(body);
   });

@@ -16,8 +16,12 @@ import { createHmac } from 'node:crypto';
 export function signatureHeader(payload: string, secret: string, timestampSeconds: number): string {
   if (!secret) throw new TypeError('signatureHeader: secret must not be empty');
   if (!Number.isInteger(timestampSeconds)) {
-    throw new TypeError(`signatureHeader: timestamp must be integer seconds, got ${timestampSeconds}`);
+    throw new TypeError(
+      `signatureHeader: timestamp must be integer seconds, got ${timestampSeconds}`,
+    );
   }
-  const signature = createHmac('sha256', secret).update(`${timestampSeconds}.${payload}`, 'utf8').digest('hex');
+  const signature = createHmac('sha256', secret)
+    .update(`${timestampSeconds}.${payload}`, 'utf8')
+    .digest('hex');
   return `t=${timestampSeconds},v1=${signature}`;
 }

@@ -61,7 +61,11 @@ export function createInboxApi(store: MessageStore): Router {
   return router;
 }
 
-function findOr404(store: MessageStore, request: Request, response: Response): StoredMessage | undefined {
+function findOr404(
+  store: MessageStore,
+  request: Request,
+  response: Response,
+): StoredMessage | undefined {
   const message = store.get(String(request.params['id']));
   if (!message) response.status(404).json({ error: 'message_not_found' });
   return message;

@@ -10,7 +10,11 @@ import type { MessageDetailJson, MessageJson } from './message-json';
  * @returns a complete HTML document.
  * @example inboxLayout('Inbox', '<p>Empty</p>')
  */
-export function inboxLayout(title: string, body: string, options: { refreshSeconds?: number } = {}): string {
+export function inboxLayout(
+  title: string,
+  body: string,
+  options: { refreshSeconds?: number } = {},
+): string {
   const refresh = options.refreshSeconds
     ? `<meta http-equiv="refresh" content="${options.refreshSeconds}">`
     : '';
@@ -75,7 +79,10 @@ export function renderMessagePage(message: MessageDetailJson): string {
     )
     .join('');
   const headers = message.headers
-    .map((header) => `<tr><th>${escapeHtml(header.name)}</th><td>${escapeHtml(header.value)}</td></tr>`)
+    .map(
+      (header) =>
+        `<tr><th>${escapeHtml(header.name)}</th><td>${escapeHtml(header.value)}</td></tr>`,
+    )
     .join('');
   return inboxLayout(
     message.subject || '(no subject)',

@@ -16,7 +16,12 @@ describe('inbox pages', () => {
     standIn = await startSmtpStandIn({ smtpPort: 0, httpPort: 0, dataDir });
     base = `http://127.0.0.1:${standIn.httpPort}`;
     await nodemailer
-      .createTransport({ host: '127.0.0.1', port: standIn.smtpPort, secure: false, ignoreTLS: true })
+      .createTransport({
+        host: '127.0.0.1',
+        port: standIn.smtpPort,
+        secure: false,
+        ignoreTLS: true,
+      })
       .sendMail({
         from: 'no-reply@sidecheck.test',
         to: 'viewer@lab.test',

@@ -13,7 +13,8 @@ const PAGE_CSP =
  * A mail's HTML runs in a sandbox (no scripts, opaque origin) and may load only inline styles and
  * our attachment URLs, so opening a message never fetches anything from the network.
  */
-const MAIL_BODY_CSP = "sandbox; default-src 'none'; style-src 'unsafe-inline'; img-src 'self' data:";
+const MAIL_BODY_CSP =
+  "sandbox; default-src 'none'; style-src 'unsafe-inline'; img-src 'self' data:";
 
 /**
  * Human-facing inbox: `GET /` (list, `?to=` filter), `GET /messages/:id`, `GET /messages/:id/html`
@@ -33,14 +34,20 @@ export function createInboxPages(store: MessageStore): Router {
   router.get('/', (request, response) => {
     const to = typeof request.query['to'] === 'string' ? request.query['to'] : '';
     const origin = requestOrigin(request);
-    const messages = store.list({ to: to || undefined }).map((message) => toMessageJson(message, origin));
+    const messages = store
+      .list({ to: to || undefined })
+      .map((message) => toMessageJson(message, origin));
     sendPage(response, 200, renderInboxPage(messages, to));
   });
 
   router.get('/messages/:id', (request, response) => {
     const message = store.get(String(request.params['id']));
     if (!message) return sendNotFound(response);
-    sendPage(response, 200, renderMessagePage(toMessageDetailJson(message, requestOrigin(request))));
+    sendPage(
+      response,
+      200,
+      renderMessagePage(toMessageDetailJson(message, requestOrigin(request))),
+    );
   });
 
   router.get('/messages/:id/html', (request, response) => {
@@ -67,5 +74,9 @@ function sendPage(response: Response, status: number, html: string): void {
 }
 
 function sendNotFound(response: Response): void {
-  sendPage(response, 404, inboxLayout('Not found', '<h1>No such message</h1><p><a href="/">Back</a></p>'));
+  sendPage(
+    response,
+    404,
+    inboxLayout('Not found', '<h1>No such message</h1><p><a href="/">Back</a></p>'),
+  );
 }

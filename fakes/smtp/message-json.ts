@@ -80,7 +80,13 @@ export function toMessageDetailJson(message: StoredMessage, origin: string): Mes
     const colon = line.indexOf(':');
     return {
       name: colon < 0 ? line : line.slice(0, colon).trim(),
-      value: colon < 0 ? '' : line.slice(colon + 1).replace(/\r?\n[ \t]+/g, ' ').trim(),
+      value:
+        colon < 0
+          ? ''
+          : line
+              .slice(colon + 1)
+              .replace(/\r?\n[ \t]+/g, ' ')
+              .trim(),
     };
   });
   return { ...toMessageJson(message, origin), headers };

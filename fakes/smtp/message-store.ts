@@ -60,7 +60,9 @@ export class MessageStore {
   /** Messages newest first, optionally only those addressed to `to` (envelope, To or Cc). */
   list(filter: { to?: string } = {}): StoredMessage[] {
     const { to } = filter;
-    const selected = to ? this.messages.filter((message) => isAddressedTo(message, to)) : this.messages;
+    const selected = to
+      ? this.messages.filter((message) => isAddressedTo(message, to))
+      : this.messages;
     return [...selected].reverse();
   }
 

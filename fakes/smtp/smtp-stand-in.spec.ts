@@ -62,7 +62,13 @@ describe('SMTP stand-in', () => {
       subject: 'Report R-001 signed — ±0.5 dB',
       text: 'Your report is attached.\nUnwanted sideband: −52 dBc',
       html: '<p>Your report is <b>attached</b>.</p>',
-      attachments: [{ filename: 'r-001.bin', content: BINARY_ATTACHMENT, contentType: 'application/octet-stream' }],
+      attachments: [
+        {
+          filename: 'r-001.bin',
+          content: BINARY_ATTACHMENT,
+          contentType: 'application/octet-stream',
+        },
+      ],
     });
     // nodemailer's own account of what it sent is the reference for envelope and Message-ID.
     expect(info.accepted).toEqual(['manager@lab.test']);
@@ -74,7 +80,10 @@ describe('SMTP stand-in', () => {
     expect(summary.subject).toBe('Report R-001 signed — ±0.5 dB');
     expect(summary.text?.trim()).toBe('Your report is attached.\nUnwanted sideband: −52 dBc');
     expect(summary.html).toBe('<p>Your report is <b>attached</b>.</p>');
-    expect(summary.envelope).toEqual({ mailFrom: 'no-reply@sidecheck.test', rcptTo: ['manager@lab.test'] });
+    expect(summary.envelope).toEqual({
+      mailFrom: 'no-reply@sidecheck.test',
+      rcptTo: ['manager@lab.test'],
+    });
     expect(summary.attachments).toHaveLength(1);
     expect(summary.attachments[0]).toMatchObject({
       filename: 'r-001.bin',
@@ -91,12 +100,20 @@ describe('SMTP stand-in', () => {
     expect(raw).toContain(`Message-ID: ${info.messageId}`);
 
     const detail = await getJson<MessageDetailJson>(`/api/messages/${summary.id}`);
-    expect(detail.headers.find((header) => header.name.toLowerCase() === 'message-id')?.value).toBe(info.messageId);
+    expect(detail.headers.find((header) => header.name.toLowerCase() === 'message-id')?.value).toBe(
+      info.messageId,
+    );
   });
 
   it('filters by recipient (envelope covers Bcc) and lists newest first', async () => {
     await send({ from: 'a@sidecheck.test', to: 'one@lab.test', subject: 'first', text: '1' });
-    await send({ from: 'a@sidecheck.test', to: 'two@lab.test', bcc: 'audit@lab.test', subject: 'second', text: '2' });
+    await send({
+      from: 'a@sidecheck.test',
+      to: 'two@lab.test',
+      bcc: 'audit@lab.test',
+      subject: 'second',
+      text: '2',
+    });
     await send({ from: 'a@sidecheck.test', to: 'ONE@lab.test', subject: 'third', text: '3' });
 
     const all = await getJson<MessageJson[]>('/api/messages');
@@ -110,8 +127,13 @@ describe('SMTP stand-in', () => {
   });
 
   it('keeps messages across a restart with the same data folder', async () => {
-    await send({ from: 'a@sidecheck.test', to: 'keep@lab.test', subject: 'kept', text: 'x',
-      attachments: [{ filename: 'k.bin', content: BINARY_ATTACHMENT }] });
+    await send({
+      from: 'a@sidecheck.test',
+      to: 'keep@lab.test',
+      subject: 'kept',
+      text: 'x',
+      attachments: [{ filename: 'k.bin', content: BINARY_ATTACHMENT }],
+    });
     await standIn.close();
     standIn = await startSmtpStandIn({ smtpPort: 0, httpPort: 0, dataDir });
     api = `http://127.0.0.1:${standIn.httpPort}`;
@@ -142,9 +164,19 @@ describe('SMTP stand-in', () => {
 
   it('rejects a message over the size limit with 552 (RFC 5321 §4.5.3.1.10)', async () => {
     await standIn.close();
-    standIn = await startSmtpStandIn({ smtpPort: 0, httpPort: 0, dataDir, maxMessageBytes: 10_000 });
+    standIn = await startSmtpStandIn({
+      smtpPort: 0,
+      httpPort: 0,
+      dataDir,
+      maxMessageBytes: 10_000,
+    });
     await expect(
-      send({ from: 'a@sidecheck.test', to: 'x@lab.test', subject: 'big', text: 'x'.repeat(50_000) }),
+      send({
+        from: 'a@sidecheck.test',
+        to: 'x@lab.test',
+        subject: 'big',
+        text: 'x'.repeat(50_000),
+      }),
     ).rejects.toMatchObject({ responseCode: 552 });
   });
 });

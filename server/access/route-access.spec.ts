@@ -43,6 +43,7 @@ const EXPECTED: Record<string, Expect> = {
   'get /reports/:id': EVERY_MEMBER,
   'get /reports/:id/pdf': EVERY_MEMBER,
   'get /verify/:token': 'public',
+  'get /openapi.json': 'public',
 };
 
 let t: TestApp;

@@ -96,6 +96,12 @@ export function drawPlot(ctx: RenderContext, spec: PlotSpec, box: BoxPt): void {
     range([spec.marker.y], yRange);
   }
   const empty = !(xRange[0] <= xRange[1] && yRange[0] <= yRange[1]);
+  if (!empty && spec.series.some((s) => s.role === 'products')) {
+    // Stems at the ends of the range would sit on the frame; leave a little room.
+    const pad = (xRange[1] - xRange[0]) * 0.03;
+    xRange[0] -= pad;
+    xRange[1] += pad;
+  }
   const map = drawPlotAxes(ctx, axesBox, empty ? [0, 1] : xRange, empty ? [0, 1] : yRange, spec);
   const { area } = map;
   if (empty) {

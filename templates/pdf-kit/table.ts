@@ -125,8 +125,9 @@ export function drawTable(ctx: RenderContext, spec: TableSpec): number {
       pages += 1;
       startPage();
     }
-    drawRow(row, ctx.y, styleOf);
-    ctx.y += row.heightPt;
+    const top = ctx.y;
+    drawRow(row, top, styleOf);
+    ctx.y = top + row.heightPt;
     rules.push(ctx.y);
   });
   finishPage();

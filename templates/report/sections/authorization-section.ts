@@ -1,0 +1,44 @@
+/**
+ * Printed as "Authorization": who tested, and the name, role, date and signature line of the
+ * person who authorized the report (ISO/IEC 17025:2017 7.8.2.1 o). The electronic signature
+ * itself is embedded in the PDF file by the server.
+ */
+import type { ReportPerson } from '../report-document';
+import type { ReportSection } from '../report-section';
+import type { RenderContext } from '../../pdf-kit/render-context';
+
+/** "2025-03-10T14:32:00Z" -> "2025-03-10 14:32 UTC"; other strings print unchanged. */
+export function formatTimestampUtc(iso: string): string {
+  const match = /^(\d{4}-\d{2}-\d{2})T(\d{2}:\d{2})(?::\d{2}(?:\.\d+)?)?Z$/.exec(iso);
+  return match ? `${match[1]} ${match[2]} UTC` : iso;
+}
+
+function personBlock(ctx: RenderContext, caption: string, person: ReportPerson, xPt: number, yPt: number, widthPt: number): void {
+  ctx.text(caption, { font: 'medium', color: ctx.theme.colors.muted, sizePt: ctx.theme.sizesPt.small, xPt, yPt, widthPt });
+  ctx.text(person.name, { font: 'medium', xPt, widthPt });
+  ctx.text(person.role, { xPt, widthPt });
+}
+
+export const authorizationSection: ReportSection = {
+  id: 'authorization',
+  render(ctx, report) {
+    ctx.heading('Authorization');
+    ctx.ensureSpace(120);
+    const { frame, doc, theme } = ctx;
+    const half = frame.widthPt / 2;
+    const top = ctx.y;
+    personBlock(ctx, 'Tested by', report.testedBy, frame.leftPt, top, half - 12);
+    personBlock(ctx, 'Authorized by', report.authorizedBy, frame.leftPt + half, top, half);
+    ctx.text(`Authorized on ${formatTimestampUtc(report.authorizedBy.authorizedAt)}`, { xPt: frame.leftPt + half, widthPt: half });
+    const lineY = ctx.y + 34;
+    doc.moveTo(frame.leftPt + half, lineY).lineTo(frame.rightPt, lineY).lineWidth(0.6).strokeColor(theme.colors.text).stroke();
+    ctx.text('Signature (electronic signature embedded in this PDF file)', {
+      sizePt: theme.sizesPt.small,
+      color: theme.colors.muted,
+      xPt: frame.leftPt + half,
+      yPt: lineY + 3,
+      widthPt: half,
+    });
+    ctx.gap(8);
+  },
+};

@@ -1,0 +1,55 @@
+/**
+ * Summary of a report's results per test: the worst verdict over the test's points and the least
+ * margin, plus the overall verdict. "Worst" ranks Fail over Conditional fail over Conditional pass
+ * over Pass (ILAC-G8:09/2019 terms); points not evaluated do not change an evaluated test's
+ * verdict, and a test with no evaluated point is "not evaluated".
+ */
+import type { ReportResult, ReportVerdict } from './report-document';
+
+const SEVERITY: Readonly<Record<ReportVerdict, number>> = {
+  'not-evaluated': 0,
+  pass: 1,
+  'conditional-pass': 2,
+  'conditional-fail': 3,
+  fail: 4,
+};
+
+export interface TestVerdictSummary {
+  testName: string;
+  verdict: ReportVerdict;
+  testPointCount: number;
+  /** Smallest margin over the test's points, with its unit; null when no point has one. */
+  leastMargin: { value: number; unit: string } | null;
+}
+
+/** The worse of two verdicts by the ranking above. */
+export function worseVerdict(a: ReportVerdict, b: ReportVerdict): ReportVerdict {
+  return SEVERITY[b] > SEVERITY[a] ? b : a;
+}
+
+/**
+ * One summary per test name, in order of first appearance.
+ * @example summariseVerdicts([{ testName: 'A', verdict: 'pass', ... }, { testName: 'A', verdict: 'fail', ... }])[0].verdict // 'fail'
+ */
+export function summariseVerdicts(results: readonly ReportResult[]): TestVerdictSummary[] {
+  const byName = new Map<string, TestVerdictSummary>();
+  for (const r of results) {
+    const entry = byName.get(r.testName) ?? { testName: r.testName, verdict: 'not-evaluated', testPointCount: 0, leastMargin: null };
+    entry.verdict = worseVerdict(entry.verdict, r.verdict);
+    entry.testPointCount += 1;
+    if (r.margin !== null && Number.isFinite(r.margin) && (entry.leastMargin === null || r.margin < entry.leastMargin.value)) {
+      entry.leastMargin = { value: r.margin, unit: r.unit };
+    }
+    byName.set(r.testName, entry);
+  }
+  return [...byName.values()];
+}
+
+/**
+ * The worst verdict over all results; "not-evaluated" only when nothing was evaluated (or the
+ * list is empty).
+ * @example overallVerdict([{ verdict: 'pass' }, { verdict: 'conditional-pass' }]) // 'conditional-pass'
+ */
+export function overallVerdict(results: readonly Pick<ReportResult, 'verdict'>[]): ReportVerdict {
+  return results.reduce<ReportVerdict>((worst, r) => worseVerdict(worst, r.verdict), 'not-evaluated');
+}
