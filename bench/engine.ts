@@ -19,11 +19,13 @@ import { occupiedBandwidthFromTrace } from '../shared/bandwidth/occupied-bandwid
 import { welchPsd } from '../shared/dsp/welch';
 import { checkEmissionMask } from '../shared/mask/check-emission-mask';
 import type { EmissionMask } from '../shared/mask/emission-mask';
+import { defaultSegmentLength } from '../shared/iq/default-segment-length';
 
 const ROOT = path.resolve(__dirname, '..');
 const QUICK = process.argv.includes('--quick');
-const SEGMENT_LENGTH = 4096;
 const CAPTURE_RATE_HZ = 192_000;
+/** The analyzer's own segment length at 192 kS/s, used by both sides so they do the same work. */
+const SEGMENT_LENGTH = defaultSegmentLength(CAPTURE_RATE_HZ);
 const CAPTURE_SECONDS = 10;
 
 /** Throughput targets, units per second (analyze-iq: seconds of capture per second). */
@@ -94,13 +96,14 @@ function microBenchmarks(sizes: number[]): Row[] {
     const options = { centerHz: 2_182_000, referenceDbm: 0 };
     checkEmissionMask(trace, MASK, options); // warm the JIT before timing
     const mask = bestOf(repeats, () => checkEmissionMask(trace, MASK, options));
-    const obw = bestOf(repeats, () => occupiedBandwidthFromTrace(trace.frequencyHz, trace.levelDbm));
+    const { frequencyHz, levelDbm } = trace;
+    const obw = bestOf(repeats, () => occupiedBandwidthFromTrace(frequencyHz, levelDbm));
     rows.push({ workload: 'mask', size, items: points, oursSeconds: mask, theirsSeconds: null });
     rows.push({ workload: 'obw', size, items: points, oursSeconds: obw, theirsSeconds: null });
     const samples = 1_920_000 * size;
     if (size > 10) {
       const note = 'skipped: 192 M samples need > 1.5 GB';
-      rows.push({ workload: 'welch', size, items: samples, oursSeconds: null, theirsSeconds: null, note });
+      rows.push({ workload: 'welch', size, items: samples, ...NOT_RUN, note });
       continue;
     }
     const next = random(size + 11);
@@ -118,11 +121,13 @@ function run(command: string, args: string[]): { seconds: number; stdout: string
   const result = spawnSync(command, args, { cwd: ROOT, encoding: 'utf8', maxBuffer: 1 << 26 });
   const seconds = Number(process.hrtime.bigint() - start) / 1e9;
   if (result.status !== 0) {
-    throw new Error(`${command} ${args.join(' ')} exited ${result.status}: ${result.stderr.trim()}`);
+    const line = `${command} ${args.join(' ')}`;
+    throw new Error(`${line} exited ${result.status}: ${result.stderr.trim()}`);
   }
   return { seconds, stdout: result.stdout };
 }
 
+const NOT_RUN = { oursSeconds: null, theirsSeconds: null };
 const CLI = [path.join(ROOT, 'scripts', 'run-cli.js')];
 const PYTHON_REFERENCE = path.join(ROOT, 'bench', 'engine_reference.py');
 
@@ -134,14 +139,13 @@ function processBenchmarks(sizes: number[], folder: string): Row[] {
     const samples = CAPTURE_RATE_HZ * seconds;
     if (size > 10) {
       const note = `skipped: a ${((samples * 8) / 1e9).toFixed(1)} GB capture file`;
-      rows.push({ workload: 'analyzeIq', size, items: seconds, oursSeconds: null, theirsSeconds: null, note });
+      rows.push({ workload: 'analyzeIq', size, items: seconds, ...NOT_RUN, note });
       continue;
     }
     const prefix = path.join(folder, `two-tone-${seconds}s`);
-    run(process.execPath, [
-      ...CLI, 'synthesize', '--out', prefix, '--rate', String(CAPTURE_RATE_HZ),
-      '--duration', String(seconds), '--tone', '700:-12', '--tone', '1900:-12', '--noise-dbfs', '-90',
-    ]);
+    const signal = ['--tone', '700:-12', '--tone', '1900:-12', '--noise-dbfs', '-90'];
+    const length = ['--rate', String(CAPTURE_RATE_HZ), '--duration', String(seconds)];
+    run(process.execPath, [...CLI, 'synthesize', '--out', prefix, ...length, ...signal]);
     const meta = `${prefix}.sigmf-meta`;
     const repeats = size === 1 ? 3 : 1;
     let ours = Infinity;
@@ -151,16 +155,17 @@ function processBenchmarks(sizes: number[], folder: string): Row[] {
       const args = [PYTHON_REFERENCE, 'analyze', meta, '--segment', String(SEGMENT_LENGTH)];
       theirs = Math.min(theirs, run('python3', args).seconds);
     }
-    rows.push({ workload: 'analyzeIq', size, items: seconds, oursSeconds: ours, theirsSeconds: theirs });
+    const timing = { oursSeconds: ours, theirsSeconds: theirs };
+    rows.push({ workload: 'analyzeIq', size, items: seconds, ...timing });
   }
   return rows;
 }
 
 function referenceMicro(sizes: number[]): Map<string, number> {
-  const args = [PYTHON_REFERENCE, 'micro', '--sizes', sizes.join(','), '--segment', String(SEGMENT_LENGTH)];
-  const report = JSON.parse(run('python3', args).stdout) as {
-    results: Array<{ size: number; maskSeconds: number; obwSeconds: number; welchSeconds?: number }>;
-  };
+  const args = [PYTHON_REFERENCE, 'micro', '--sizes', sizes.join(',')];
+  const output = run('python3', [...args, '--segment', String(SEGMENT_LENGTH)]).stdout;
+  type Timing = { size: number; maskSeconds: number; obwSeconds: number; welchSeconds?: number };
+  const report = JSON.parse(output) as { results: Timing[] };
   const times = new Map<string, number>();
   for (const r of report.results) {
     times.set(`mask:${r.size}`, r.maskSeconds);
@@ -193,33 +198,46 @@ function main(): void {
 }
 
 function report(rows: Row[]): void {
-  const header = 'workload    size  items        ours s   numpy s  ours/theirs  ours rate        target       growth';
-  console.log(`Sidecheck engine benchmark: ${os.cpus().length} x ${os.cpus()[0]?.model ?? 'cpu'}, node ${process.version}`);
-  console.log(header);
+  const cpu = os.cpus()[0]?.model ?? 'cpu';
+  console.log(`Sidecheck engine benchmark: ${os.cpus().length} x ${cpu}, node ${process.version}`);
+  const table: string[][] = [
+    ['workload', 'size', 'items', 'ours s', 'numpy s', 'ours/theirs', 'ours rate', 'target'].concat(
+      ['growth', ''],
+    ),
+  ];
   const json = rows.map((row) => {
     const base = rows.find((r) => r.workload === row.workload && r.size === 1);
-    const rate = row.oursSeconds === null ? null : row.items / row.oursSeconds;
-    const ratio = row.oursSeconds !== null && row.theirsSeconds !== null ? row.oursSeconds / row.theirsSeconds : null;
-    const growth = row.oursSeconds !== null && base?.oursSeconds ? row.oursSeconds / base.oursSeconds : null;
+    const ours = row.oursSeconds;
+    const rate = ours === null ? null : row.items / ours;
+    const ratio = ours !== null && row.theirsSeconds !== null ? ours / row.theirsSeconds : null;
+    const growth = ours !== null && base?.oursSeconds ? ours / base.oursSeconds : null;
     const target = TARGETS[row.workload];
-    const meets = rate === null ? null : rate >= target.value;
-    console.log(
-      [
-        row.workload.padEnd(10),
-        `${row.size}x`.padStart(5),
-        String(row.items).padStart(10),
-        format(row.oursSeconds, 4).padStart(10),
-        format(row.theirsSeconds, 4).padStart(9),
-        format(ratio, 2).padStart(12),
-        `${format(rate, 1)} ${target.unit}`.padStart(22),
-        `>= ${format(target.value, 0)}${meets === null ? '' : meets ? ' ok' : ' MISS'}`.padStart(13),
-        (growth === null ? '-' : `${growth.toFixed(1)}x`).padStart(8),
-        row.note ?? '',
-      ].join(' '),
-    );
-    return { ...row, oursRate: rate, rateUnit: target.unit, target: target.value, meetsTarget: meets, ratio, growth };
+    const meetsTarget = rate === null ? null : rate >= target.value;
+    const verdict = meetsTarget === null ? '' : meetsTarget ? ' ok' : ' MISS';
+    table.push([
+      row.workload,
+      `${row.size}x`,
+      String(row.items),
+      format(ours, 4),
+      format(row.theirsSeconds, 4),
+      format(ratio, 2),
+      `${format(rate, 1)} ${target.unit}`,
+      `>= ${format(target.value, 0)}${verdict}`,
+      growth === null ? '-' : `${growth.toFixed(1)}x`,
+      row.note ?? '',
+    ]);
+    const { value, unit } = target;
+    return { ...row, oursRate: rate, rateUnit: unit, target: value, meetsTarget, ratio, growth };
   });
-  console.log(JSON.stringify({ bench: 'engine', node: process.version, cpus: os.cpus().length, rows: json }));
+  const widths = table[0].map((_, c) => Math.max(...table.map((cells) => cells[c].length)));
+  for (const cells of table) {
+    const padded = cells.map((cell, c) =>
+      c === 0 || c === 9 ? cell.padEnd(widths[c]) : cell.padStart(widths[c]),
+    );
+    console.log(padded.join('  ').trimEnd());
+  }
+  const cpus = os.cpus().length;
+  console.log(JSON.stringify({ bench: 'engine', node: process.version, cpus, rows: json }));
 }
 
 main();

@@ -65,7 +65,8 @@ def micro(sizes, segment):
         entry = {'size': size, 'maskPoints': points, 'maskSeconds': mask_s, 'obwSeconds': obw_s}
         samples = 1_920_000 * size
         if samples <= 19_200_000:
-            x = (rng.standard_normal(samples) + 1j * rng.standard_normal(samples)).astype(np.complex64)
+            x = rng.standard_normal(samples) + 1j * rng.standard_normal(samples)
+            x = x.astype(np.complex64)
             welch_s = best_of(
                 lambda: signal.welch(x, fs=192_000, window='hann', nperseg=segment,
                                      return_onesided=False, scaling='density', detrend=False),
@@ -115,8 +116,8 @@ def analyze(meta_path, segment):
     sideband = 'usb' if strongest >= 0 else 'lsb'
     unwanted_db = None
     imd3 = imd5 = None
-    if tones:
-        unwanted_db = pep_db - 10 * np.log10(band_power(-strongest))
+    if tones:  # strongest wanted tone vs the power at its mirror frequency
+        unwanted_db = tones[0]['levelDbfs'] - 10 * np.log10(band_power(-strongest))
     if len(tones) >= 2:
         f1, f2 = sorted([tones[0]['frequencyHz'], tones[1]['frequencyHz']])
         delta = f2 - f1

@@ -5,7 +5,7 @@
 # When run as root the cluster runs as the unprivileged "postgres" user (initdb refuses root).
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
-PG_DIR="${PG_DIR:-$ROOT/.data/pg}"
+PG_DIR="$(realpath -m "${PG_DIR:-$ROOT/.data/pg}")"
 PG_PORT="${PG_PORT:-54610}"
 PG_DB="${PG_DB:-sidecheck}"
 PG_APP_USER="sidecheck"

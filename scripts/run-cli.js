@@ -58,10 +58,10 @@ function buildInputs() {
 function isStale() {
   const built = mtimeMs(stamp);
   if (built === undefined || mtimeMs(entry) === undefined) return true;
-  // A compiled file whose source is gone also means a rebuild (mtime undefined).
+  // A source that is gone is ignored: whatever imported it has changed too.
   return buildInputs().some((file) => {
     const changed = mtimeMs(file);
-    return changed === undefined || changed > built;
+    return changed !== undefined && changed > built;
   });
 }
 
@@ -95,7 +95,8 @@ function build() {
   process.stderr.write('building the command line...\n');
   // Stamp with the start time, so a source saved during the build still counts as newer.
   const startedAt = new Date();
-  fs.rmSync(outDir, { recursive: true, force: true });
+  // Compiled over the old output rather than after deleting it: another process may be loading
+  // the command line at this moment.
   const tsc = path.join(root, 'node_modules', 'typescript', 'bin', 'tsc');
   const result = spawnSync(process.execPath, [tsc, '-p', path.join(root, 'tsconfig.cli.json')], {
     cwd: root,

@@ -25,7 +25,7 @@ async function main() {
       sequelize,
       publicUrl: config.publicUrl,
       keyEncryptionSecret: config.keyEncryptionSecret,
-      enqueueMail: (transaction, mail) => enqueueMail(boss, sequelize, transaction, mail),
+      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
     },
   });
   const server = app.listen(config.port, config.host, () => {

@@ -7,6 +7,8 @@ import { authRoutes } from './auth/routes';
 import { clientRoutes } from './clients/routes';
 import { deviceRoutes } from './devices/routes';
 import { healthRoutes } from './health/routes';
+import { homeRoutes } from './home/routes';
+import { instrumentRoutes } from './instruments/routes';
 import { planRoutes } from './plans/routes';
 import { reportRoutes } from './reports/routes';
 import { ruleSetRoutes } from './rule-sets/routes';
@@ -28,17 +30,19 @@ export function routeTable(deps: RouteTableDeps): RouteDef[] {
     ...clientRoutes(),
     ...deviceRoutes(),
     ...ruleSetRoutes(),
+    ...instrumentRoutes(),
+    ...homeRoutes(deps.sequelize),
     ...planRoutes(),
     ...runRoutes(deps.sequelize),
     ...reportRoutes(deps.reports),
   ] as RouteDef[];
-  const openApi = route({
+  const openApi: RouteDef = route({
     method: 'get',
     path: '/openapi.json',
     summary: 'This document: the OpenAPI 3.1 description of the API',
     access: { kind: 'public' },
     transaction: 'none',
-    handler: async () => buildOpenApi(routes, ENGINE_VERSION),
+    handler: async (): Promise<unknown> => buildOpenApi([...routes, openApi], ENGINE_VERSION),
   });
-  return [...routes, openApi as RouteDef];
+  return [...routes, openApi];
 }

@@ -1,18 +1,10 @@
 import { Router } from 'express';
-import { invalidParam, noSuch } from './api-error';
+import { noSuch } from './api-error';
 import type { Customer } from './api-objects';
-import { readAddress } from './address-param';
+import { applyCustomerParams } from './customer-params';
 import { changedAttributes, recordEvent } from './event-log';
-import {
-  isPlausibleEmail,
-  optionalArray,
-  optionalNullableString,
-  optionalString,
-  rejectUnknownParams,
-  type FormBody,
-} from './form-params';
+import { optionalString, rejectUnknownParams } from './form-params';
 import { createdFilter, listPage } from './list-page';
-import { applyMetadata, readMetadata } from './metadata-param';
 import { newObjectId, unixNow } from './object-id';
 import type { PaymentsContext } from './payments-context';
 import { presentObject, requestExpand, requestParams } from './present-object';
@@ -45,7 +37,7 @@ export function customersRouter(context: PaymentsContext): Router {
     const body = requestParams(request);
     rejectUnknownParams(body, WRITABLE);
     const customer = store.mutate(() => {
-      const created: Customer = applyWritable(
+      const created: Customer = applyCustomerParams(
         {
           id: newObjectId('cus', 14),
           object: 'customer',
@@ -87,7 +79,7 @@ export function customersRouter(context: PaymentsContext): Router {
     rejectUnknownParams(body, WRITABLE);
     const before = findCustomer(context, String(request.params['id']));
     const updated = store.mutate((state) => {
-      const after = applyWritable(structuredClone(before), body);
+      const after = applyCustomerParams(structuredClone(before), body);
       state.customers[after.id] = after;
       const previous = changedAttributes(before, after);
       if (Object.keys(previous).length) recordEvent(context, 'customer.updated', after, previous);
@@ -131,23 +123,5 @@ export function customersRouter(context: PaymentsContext): Router {
 function findCustomer(context: PaymentsContext, id: string): Customer {
   const customer = context.store.state.customers[id];
   if (!customer) throw noSuch('customer', id);
-  return customer;
-}
-
-/** Applies the writable parameters; '' unsets a field, metadata merges (API conventions). */
-function applyWritable(customer: Customer, body: FormBody): Customer {
-  const email = optionalNullableString(body, 'email');
-  if (email && !isPlausibleEmail(email))
-    throw invalidParam('email', `Invalid email address: ${email}`, 'email_invalid');
-  for (const field of ['description', 'name', 'phone'] as const) {
-    const value = optionalNullableString(body, field);
-    if (value !== undefined) customer[field] = value;
-  }
-  if (email !== undefined) customer.email = email;
-  const address = readAddress(body);
-  if (address !== undefined) customer.address = address;
-  const locales = optionalArray(body, 'preferred_locales');
-  if (locales !== undefined) customer.preferred_locales = locales.map(String);
-  customer.metadata = applyMetadata(customer.metadata, readMetadata(body));
   return customer;
 }

@@ -41,7 +41,7 @@ export async function payOnHostedPage(
     if (!fieldNames.includes(required))
       throw new Error(`payOnHostedPage: the form has no ${required} field`);
   }
-  const form = new URLSearchParams(fieldNames.map((name) => [name, values[name] ?? '']));
+  const form = new URLSearchParams(fieldNames.map((name): [string, string] => [name, values[name] ?? '']));
   const response = await fetch(new URL(action, pageUrl), {
     method: 'POST',
     body: form,

@@ -1,11 +1,12 @@
-import { Router, type Response } from 'express';
-import type { CheckoutSession } from './checkout-objects';
+import { Router } from 'express';
 import { readCardForm } from './card-form';
-import { chargeCard, createPaymentIntent } from './card-payment';
-import { completeSession, expireDueSessions, knownBuyerEmail } from './checkout-session-lifecycle';
+import { chargeCard } from './card-payment';
+import { createPaymentIntent } from './payment-intent-create';
+import { completeSession, knownBuyerEmail } from './checkout-session-lifecycle';
 import { requestParams } from './present-object';
 import { HOSTED_PAGE_CSS } from './hosted-page-css';
-import { renderPaymentPage, renderStatusPage, type PaymentFormState } from './hosted-page-html';
+import { renderPaymentPage, type PaymentFormState } from './hosted-page-html';
+import { sendHostedPage, sendPaid, sessionOrStatusPage } from './hosted-page-response';
 import type { PaymentsContext } from './payments-context';
 
 /**
@@ -35,7 +36,7 @@ export function hostedPageRouter(context: PaymentsContext): Router {
       declineMessage: null,
       needsEmail: knownBuyerEmail(context, session) === null,
     };
-    sendPage(
+    sendHostedPage(
       response,
       200,
       renderPaymentPage(session, store.state.lineItems[session.id] ?? [], form),
@@ -60,7 +61,7 @@ export function hostedPageRouter(context: PaymentsContext): Router {
         declineMessage: null,
         needsEmail: knownEmail === null,
       };
-      sendPage(response, 400, renderPaymentPage(session, items, state), session);
+      sendHostedPage(response, 400, renderPaymentPage(session, items, state), session);
       return;
     }
     const { card } = form;
@@ -89,85 +90,11 @@ export function hostedPageRouter(context: PaymentsContext): Router {
         declineMessage: error.message,
         needsEmail: knownEmail === null,
       };
-      sendPage(response, 402, renderPaymentPage(session, items, state), session);
+      sendHostedPage(response, 402, renderPaymentPage(session, items, state), session);
       return;
     }
     sendPaid(response, session);
   });
 
   return router;
-}
-
-/** The open session, or undefined after answering with the page for a missing/expired/paid one. */
-function sessionOrStatusPage(
-  context: PaymentsContext,
-  id: string,
-  response: Response,
-): CheckoutSession | undefined {
-  expireDueSessions(context);
-  const session = context.store.state.checkoutSessions[id];
-  if (!session) {
-    sendPage(
-      response,
-      404,
-      renderStatusPage('Payment page not found', 'There is no payment with this link.', null),
-    );
-  } else if (session.status === 'expired') {
-    const link = session.cancel_url
-      ? { href: session.cancel_url, label: 'Return to the shop' }
-      : null;
-    sendPage(
-      response,
-      410,
-      renderStatusPage('Payment page expired', 'This payment link has expired.', link),
-    );
-  } else if (session.status === 'complete') {
-    sendPaid(response, session);
-  } else {
-    return session;
-  }
-  return undefined;
-}
-
-function sendPaid(response: Response, session: CheckoutSession): void {
-  if (session.success_url) {
-    response.redirect(303, session.success_url.replaceAll('{CHECKOUT_SESSION_ID}', session.id));
-    return;
-  }
-  sendPage(
-    response,
-    200,
-    renderStatusPage('Payment received', 'Thank you, your payment is complete.', null),
-  );
-}
-
-/**
- * Sends a page with a CSP that allows nothing but our style sheet and posting the form to
- * ourselves; the success URL's origin is listed in form-action because browsers apply that
- * directive to the redirect after the POST as well.
- */
-function sendPage(
-  response: Response,
-  status: number,
-  html: string,
-  session?: CheckoutSession,
-): void {
-  let formTargets = "'self'";
-  if (session?.success_url) {
-    try {
-      formTargets += ` ${new URL(session.success_url.replaceAll('{CHECKOUT_SESSION_ID}', 'x')).origin}`;
-    } catch {
-      // validated at creation; an unparsable URL only loses the extra origin
-    }
-  }
-  response
-    .status(status)
-    .set(
-      'Content-Security-Policy',
-      `default-src 'none'; style-src 'self'; form-action ${formTargets}; base-uri 'none'; frame-ancestors 'none'`,
-    )
-    .set('Cache-Control', 'no-store')
-    .set('X-Content-Type-Options', 'nosniff')
-    .type('html')
-    .send(html);
 }

@@ -2,7 +2,8 @@ import { Router } from 'express';
 import { ApiError, invalidParam, missingParam, noSuch } from './api-error';
 import type { JsonObject } from './api-objects';
 import type { PaymentIntent } from './payment-objects';
-import { chargeCard, createPaymentIntent } from './card-payment';
+import { chargeCard } from './card-payment';
+import { createPaymentIntent } from './payment-intent-create';
 import { expandObject } from './expand-fields';
 import {
   isPlausibleEmail,

@@ -60,8 +60,12 @@ export async function startPaymentsFixture(
     secretKey: TEST_SECRET_KEY,
     ...options,
   };
+  const standIn = await startPaymentsStandIn(settings).catch(async (error: unknown) => {
+    await rm(dataDir, { recursive: true, force: true }); // no stray temp folders on a failed start
+    throw error;
+  });
   const fixture: PaymentsFixture = {
-    standIn: await startPaymentsStandIn(settings),
+    standIn,
     stripe: undefined as unknown as Stripe,
     dataDir,
     baseUrl: '',

@@ -3,6 +3,7 @@ import { closeHttpServer, listenOnLoopback, LOOPBACK_HOST } from '../loopback-li
 import { expireDueSessions } from './checkout-session-lifecycle';
 import { createPaymentsApp } from './payments-app';
 import type { PaymentsContext } from './payments-context';
+import { retryDelayMs } from './retry-delay';
 import { PaymentsStore } from './store';
 import { WebhookDeliveryWorker } from './webhook-delivery';
 
@@ -36,7 +37,8 @@ export type PaymentsStandIn = { close(): Promise<void>; port: number };
  *
  * @param options - see {@link PaymentsStandInOptions}.
  * @returns the running stand-in with its real port.
- * @throws TypeError for a missing secret key or a webhook URL without a secret; listen errors.
+ * @throws TypeError for a missing secret key or a webhook URL without a secret, RangeError for
+ *   impossible retry settings; listen errors.
  * @example const payments = await startPaymentsStandIn({ port: 0, dataDir, secretKey: 'sk_test_local' })
  */
 export async function startPaymentsStandIn(
@@ -51,11 +53,14 @@ export async function startPaymentsStandIn(
   if (webhookUrls.length && !options.webhookSecret) {
     throw new TypeError('startPaymentsStandIn: webhookSecret is required when webhookUrl is set');
   }
+  const retryBaseMs = options.retryBaseMs ?? 1000;
+  const retryCapMs = options.retryCapMs ?? Math.max(5 * 60 * 1000, retryBaseMs);
+  retryDelayMs(1, { retryBaseMs, retryCapMs }); // throws RangeError for impossible settings now
   const store = PaymentsStore.open(options.dataDir);
   const worker = new WebhookDeliveryWorker(store, {
     secret: options.webhookSecret ?? '',
-    retryBaseMs: options.retryBaseMs ?? 1000,
-    retryCapMs: options.retryCapMs ?? 5 * 60 * 1000,
+    retryBaseMs,
+    retryCapMs,
     timeoutMs: options.webhookTimeoutMs ?? 10_000,
   });
   const context: PaymentsContext = {

@@ -1,7 +1,7 @@
 import type { DeliveryAttempt, WebhookDelivery } from './payments-state';
 import type { PaymentsStore } from './store';
-import { postWebhook } from './webhook-post';
-import { signatureHeader } from './webhook-signature';
+import { retryDelayMs } from './retry-delay';
+import { postSignedEvent } from './webhook-post';
 
 /** Settings of the delivery worker. */
 export type DeliverySettings = {
@@ -109,20 +109,11 @@ export class WebhookDeliveryWorker {
     let status: number | null = null;
     let error: string | null = null;
     try {
-      status = await postWebhook(
-        delivery.url,
-        body,
-        {
-          'Content-Type': 'application/json; charset=utf-8',
-          'Stripe-Signature': signatureHeader(
-            body,
-            this.settings.secret,
-            Math.floor(started / 1000),
-          ),
-          'User-Agent': 'sidecheck-payments-stand-in/1 (webhook delivery)',
-        },
-        { timeoutMs: this.settings.timeoutMs, signal: this.abort.signal },
-      );
+      status = await postSignedEvent(delivery.url, body, {
+        secret: this.settings.secret,
+        timeoutMs: this.settings.timeoutMs,
+        signal: this.abort.signal,
+      });
     } catch (cause) {
       if (this.closed) return; // shutdown, not the endpoint's fault: stays pending for next start
       error = cause instanceof Error ? cause.message : String(cause);
@@ -137,21 +128,15 @@ export class WebhookDeliveryWorker {
       const current = state.deliveries[delivery.id];
       if (!current) return; // reset while the attempt was in flight
       current.attempts.push(record);
-      const succeeded = status !== null && status >= 200 && status < 300;
-      if (succeeded && !current.deliveredAt) {
+      if (current.deliveredAt) return; // a replay of a delivered event changes nothing else
+      if (isSuccess(record)) {
         current.deliveredAt = record.at;
         current.nextAttemptAt = null;
         const stored = state.events[current.eventId];
         if (stored) stored.pending_webhooks = Math.max(0, stored.pending_webhooks - 1);
-      } else if (!succeeded && !current.deliveredAt) {
-        const failures = current.attempts.filter(
-          (a) => a.status === null || a.status < 200 || a.status >= 300,
-        );
-        const delay = Math.min(
-          this.settings.retryCapMs,
-          this.settings.retryBaseMs * 2 ** (failures.length - 1),
-        );
-        current.nextAttemptAt = Date.now() + delay;
+      } else {
+        const failures = current.attempts.filter((attempt) => !isSuccess(attempt)).length;
+        current.nextAttemptAt = Date.now() + retryDelayMs(failures, this.settings);
       }
     });
   }
@@ -171,4 +156,9 @@ export class WebhookDeliveryWorker {
   private find(id: string): WebhookDelivery | undefined {
     return this.store.state.deliveries[id];
   }
+}
+
+/** Any 2xx answer counts as received, as the API documents for webhook endpoints. */
+function isSuccess(attempt: DeliveryAttempt): boolean {
+  return attempt.status !== null && attempt.status >= 200 && attempt.status < 300;
 }

@@ -1,5 +1,32 @@
 import { request as httpRequest } from 'node:http';
 import { request as httpsRequest } from 'node:https';
+import { signatureHeader } from './webhook-signature';
+
+/**
+ * POSTs one event as a webhook: JSON body, `Stripe-Signature` computed for this attempt's time
+ * (so a retry hours later still passes the receiver's 300 s tolerance).
+ *
+ * @param url - the endpoint.
+ * @param body - the serialised event, sent and signed byte for byte.
+ * @param options.secret - the signing secret.
+ * @param options.timeoutMs - see {@link postWebhook}.
+ * @param options.signal - see {@link postWebhook}.
+ * @returns the response status code.
+ * @throws on connection errors, timeouts and aborts.
+ * @example await postSignedEvent(url, JSON.stringify(event), { secret, timeoutMs: 10000 }) // 200
+ */
+export function postSignedEvent(
+  url: string,
+  body: string,
+  options: { secret: string; timeoutMs: number; signal?: AbortSignal },
+): Promise<number> {
+  const headers = {
+    'Content-Type': 'application/json; charset=utf-8',
+    'Stripe-Signature': signatureHeader(body, options.secret, Math.floor(Date.now() / 1000)),
+    'User-Agent': 'sidecheck-payments-stand-in/1 (webhook delivery)',
+  };
+  return postWebhook(url, body, headers, options);
+}
 
 /**
  * POSTs one webhook body and resolves with the HTTP status. A fresh connection per attempt (no

@@ -83,6 +83,7 @@ describe('SMTP stand-in', () => {
     expect(summary.envelope).toEqual({
       mailFrom: 'no-reply@sidecheck.test',
       rcptTo: ['manager@lab.test'],
+      authUser: null,
     });
     expect(summary.attachments).toHaveLength(1);
     expect(summary.attachments[0]).toMatchObject({
@@ -103,6 +104,21 @@ describe('SMTP stand-in', () => {
     expect(detail.headers.find((header) => header.name.toLowerCase() === 'message-id')?.value).toBe(
       info.messageId,
     );
+  });
+
+  it('accepts clients that log in (AUTH PLAIN/LOGIN over plain SMTP) as well as anonymous ones', async () => {
+    const info = await nodemailer
+      .createTransport({
+        host: '127.0.0.1',
+        port: standIn.smtpPort,
+        secure: false,
+        ignoreTLS: true,
+        auth: { user: 'sidecheck', pass: 'any-password' },
+      })
+      .sendMail({ from: 'a@sidecheck.test', to: 'auth@lab.test', subject: 'with auth', text: 'x' });
+    expect(info.accepted).toEqual(['auth@lab.test']);
+    const [message] = await getJson<MessageJson[]>('/api/messages?to=auth@lab.test');
+    expect(message.envelope.authUser).toBe('sidecheck');
   });
 
   it('filters by recipient (envelope covers Bcc) and lists newest first', async () => {

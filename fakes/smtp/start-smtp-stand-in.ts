@@ -42,6 +42,7 @@ export async function startSmtpStandIn(options: SmtpStandInOptions): Promise<Smt
     secure: false,
     disabledCommands: ['STARTTLS'],
     authOptional: true,
+    allowInsecureAuth: true, // AUTH over plain SMTP (loopback only; STARTTLS is off anyway)
     disableReverseLookup: true, // no DNS queries for the (always loopback) client address
     logger: false,
     size: maxMessageBytes,
@@ -62,6 +63,7 @@ export async function startSmtpStandIn(options: SmtpStandInOptions): Promise<Smt
         const envelope = {
           mailFrom: session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
           rcptTo: session.envelope.rcptTo.map((rcpt) => rcpt.address),
+          authUser: typeof session.user === 'string' ? session.user : null,
         };
         store.add(Buffer.concat(chunks), envelope).then(
           (message) => callback(null, `Message queued as ${message.id}`),

@@ -6,6 +6,8 @@ export type MessageEnvelope = {
   mailFrom: string;
   /** Every RCPT TO address, in the order given (includes Bcc recipients). */
   rcptTo: string[];
+  /** User name the client logged in with (any password is accepted), null when it did not. */
+  authUser: string | null;
 };
 
 /** One received message as kept by the stand-in: the exact bytes plus their parse. */

@@ -7,7 +7,7 @@ let t: TestApp;
 beforeAll(async () => {
   t = await startTestApp();
 });
-afterAll(() => t.close());
+afterAll(() => t?.close());
 
 const refreshWith = (cookie: string) => request(t.app).post('/api/auth/refresh').set('Cookie', cookie);
 const cookieOf = (res: request.Response) => ([] as string[]).concat(res.headers['set-cookie'] ?? []).map((c) => c.split(';')[0]).join('; ');

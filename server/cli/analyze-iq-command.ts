@@ -104,7 +104,9 @@ export async function analyzeIqCommand(argv: string[], output: CliOutput): Promi
 }
 
 function formatReport(r: AnalyzeIqReport): string {
-  const tones = r.tones.map((t) => `${t.frequencyHz.toFixed(1)} Hz @ ${t.levelDbfs.toFixed(2)} dBFS`);
+  const tones = r.tones.map(
+    (t) => `${t.frequencyHz.toFixed(1)} Hz @ ${t.levelDbfs.toFixed(2)} dBFS`,
+  );
   return formatTable([
     ['file', `${r.file} (${r.format}, ${r.datatype})`],
     ['sample rate', r.sampleRateHz, 'Hz'],

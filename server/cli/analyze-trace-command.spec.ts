@@ -47,7 +47,8 @@ describe('sidecheck analyze-trace (compiled CLI)', () => {
     const result = JSON.parse(run.stdout);
     // Worst point: the band beyond the 1500 Hz step sits at 0 dBm under a 40 - 28 = 12 dBm limit;
     // the lowest such bin is at +1505 Hz.
-    expect(result).toMatchObject({ verdict: 'pass', pointCount: 2000, worstFrequencyHz: CENTER_HZ + 1505 });
+    expect(result).toMatchObject({ verdict: 'pass', pointCount: 2000 });
+    expect(result.worstFrequencyHz).toBe(CENTER_HZ + 1505);
     expect(result.worstMarginDb).toBeCloseTo(12, 9);
     // RR 1.153 definition, 0.5 % of the power outside each limit: a flat 2400 Hz band -> 2376 Hz.
     expect(result.occupiedBandwidthHz).toBeCloseTo(2376, 3);
@@ -81,23 +82,28 @@ describe('sidecheck analyze-trace (compiled CLI)', () => {
 
   it('refuses a mask that breaks the schema or is not JSON, exit 1', () => {
     const csv = file('ok.csv', traceCsv());
-    const positive = file('positive.json', JSON.stringify({ reference: 'pep', vertices: [[0, 0], [100, 3]] }));
+    const over = { reference: 'pep', vertices: [[0, 0], [100, 3]] };
+    const positive = file('positive.json', JSON.stringify(over));
     const run = runCompiledCli(args(csv, positive));
     expect(run.status).toBe(1);
     expect(errorLines(run)).toHaveLength(1);
     expect(run.stderr).toMatch(/positive\.json: \/vertices\/1\/1 must be <= 0/);
-    const typo = runCompiledCli(args(csv, file('typo.json', JSON.stringify({ ...MASK, referense: 1 }))));
+    const misspelt = file('typo.json', JSON.stringify({ ...MASK, referense: 1 }));
+    const typo = runCompiledCli(args(csv, misspelt));
     expect(typo.stderr).toMatch(/unknown member "referense"/);
-    const broken = runCompiledCli(args(csv, file('broken.json', '{\n  "reference": "pep",\n  "vertices": [[0, 0],]\n}')));
+    // The stray "]" after "[[0, 0]," is character 23 of line 3.
+    const brokenText = '{\n  "reference": "pep",\n  "vertices": [[0, 0],]\n}';
+    const broken = runCompiledCli(args(csv, file('broken.json', brokenText)));
     expect(broken.status).toBe(1);
-    expect(broken.stderr).toMatch(/broken\.json: line 3, column 24: not valid JSON/);
+    expect(broken.stderr).toMatch(/broken\.json: line 3, column 23: not valid JSON/);
   });
 
   it('treats missing options as usage errors (exit 2) and a missing file as input (exit 1)', () => {
-    const noMask = runCompiledCli(['analyze-trace', 'x.csv', '--center-hz', '1', '--reference-dbm', '0']);
+    const noMask = runCompiledCli(['analyze-trace', 'x.csv', '--center-hz', '1']);
     expect(noMask.status).toBe(2);
     expect(errorLines(noMask)).toHaveLength(1);
-    const badNumber = runCompiledCli(args('x.csv').map((a) => (a === String(CENTER_HZ) ? '2MHz' : a)));
+    const withUnit = args('x.csv').map((a) => (a === String(CENTER_HZ) ? '2MHz' : a));
+    const badNumber = runCompiledCli(withUnit);
     expect(badNumber.status).toBe(2);
     expect(badNumber.stderr).toMatch(/--center-hz must be a number, got "2MHz"/);
     const missing = runCompiledCli(args(path.join(temp.folder, 'nope.csv')));

@@ -16,7 +16,8 @@ const SYNTAX = {
   flagOptions: ['json', 'help'],
 };
 
-const HELP = `Usage: sidecheck analyze-trace FILE.csv --mask MASK.json --center-hz HZ --reference-dbm DBM [--json]
+const HELP = `Usage: sidecheck analyze-trace FILE.csv --mask MASK.json --center-hz HZ
+                               --reference-dbm DBM [--json]
   Checks a spectrum trace against a symmetric emission mask and measures its 99 % occupied
   bandwidth. The mask's relative levels are added to --reference-dbm (the measured PEP or mean
   power, as the mask's "reference" says). Exit 0 whether the trace passes or fails the mask;
@@ -84,7 +85,8 @@ export async function analyzeTraceCommand(argv: string[], output: CliOutput): Pr
     const span = `${s.fromOffsetHz} .. ${s.toOffsetHz === Infinity ? 'inf' : s.toOffsetHz}`;
     const limit = `${s.fromRelDb} .. ${s.toRelDb}`;
     const worst = Number.isNaN(s.worstMarginDb) ? 'n/a' : s.worstMarginDb.toFixed(2);
-    output.stdout(`${span.padEnd(29)}${limit.padEnd(18)}${String(s.pointCount).padEnd(9)}${worst}\n`);
+    const points = String(s.pointCount);
+    output.stdout(`${span.padEnd(29)}${limit.padEnd(18)}${points.padEnd(9)}${worst}\n`);
   }
   return 0;
 }

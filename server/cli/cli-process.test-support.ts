@@ -15,7 +15,8 @@ export interface CliRun {
 
 /** Runs `node scripts/run-cli.js ...args` to completion. */
 export function runCompiledCli(args: string[], timeoutMs = 120_000): CliRun {
-  const result = spawnSync(process.execPath, [path.join(PROJECT_ROOT, 'scripts', 'run-cli.js'), ...args], {
+  const script = path.join(PROJECT_ROOT, 'scripts', 'run-cli.js');
+  const result = spawnSync(process.execPath, [script, ...args], {
     cwd: PROJECT_ROOT,
     encoding: 'utf8',
     timeout: timeoutMs,
@@ -26,7 +27,8 @@ export function runCompiledCli(args: string[], timeoutMs = 120_000): CliRun {
 
 /** The stderr of a failed run without the one-time build notice. */
 export function errorLines(run: CliRun): string[] {
-  return run.stderr.split('\n').filter((line) => line !== '' && line !== 'building the command line...');
+  const notice = 'building the command line...';
+  return run.stderr.split('\n').filter((line) => line !== '' && line !== notice);
 }
 
 /** A fresh temp folder for one spec file, removed by the returned cleanup. */

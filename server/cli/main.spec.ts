@@ -16,13 +16,18 @@ describe('sidecheck command line (compiled)', () => {
     expect(runCompiledCli(['analyze-iq', '--help']).stdout).toMatch(/^Usage: sidecheck analyze-iq/);
   });
 
-  it('exits 2 with one stderr line for an unknown command or option, usage on stderr when bare', () => {
+  it('exits 2 with one stderr line for an unknown command or option', () => {
     const unknown = runCompiledCli(['analyse-iq']);
     expect(unknown.status).toBe(2);
-    expect(errorLines(unknown)).toEqual(['sidecheck: unknown command "analyse-iq" (see sidecheck --help)']);
+    const expected = 'sidecheck: unknown command "analyse-iq" (see sidecheck --help)';
+    expect(errorLines(unknown)).toEqual([expected]);
     const option = runCompiledCli(['analyze-iq', 'x.sigmf-meta', '--sidebnd', 'usb']);
     expect(option.status).toBe(2);
-    expect(errorLines(option)).toEqual(['sidecheck: analyze-iq: unknown option --sidebnd (see --help)']);
+    const message = 'sidecheck: analyze-iq: unknown option --sidebnd (see --help)';
+    expect(errorLines(option)).toEqual([message]);
+  });
+
+  it('prints usage on stderr with exit 2 when called bare', () => {
     const bare = runCompiledCli([]);
     expect(bare.status).toBe(2);
     expect(bare.stdout).toBe('');

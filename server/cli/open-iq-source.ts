@@ -36,18 +36,35 @@ export async function openIqSource(
   const detected = detectFileKind(file, head).kind;
   const format = options.format ?? guessFormat(detected, file);
   if (format !== 'cf32' && format !== 'ci16' && options.rateHz !== undefined) {
-    throw usageError(`--rate applies to headerless cf32/ci16 files; ${format} files state their rate`);
+    const detail = `${format} files state their rate`;
+    throw usageError(`--rate applies to headerless cf32/ci16 files; ${detail}`);
   }
   if (format === 'sigmf') return openSigmf(file);
   const { size } = await fs.stat(file);
   if (format === 'wav') {
     const header = inFile(file, () => parseWavHeader(head, size));
     const { dataOffset, dataLengthBytes, datatype, sampleRateHz } = header;
-    return { format, dataPath: file, datatype, sampleRateHz, dataOffset, dataLengthBytes, centerFrequencyHz: null };
+    return {
+      format,
+      dataPath: file,
+      datatype,
+      sampleRateHz,
+      dataOffset,
+      dataLengthBytes,
+      centerFrequencyHz: null,
+    };
   }
   if (options.rateHz === undefined) throw usageError(`--rate HZ is required for a ${format} file`);
   const { datatype, sampleRateHz } = rawIqDatatype(format, options.rateHz);
-  return { format, dataPath: file, datatype, sampleRateHz, dataOffset: 0, dataLengthBytes: size, centerFrequencyHz: null };
+  return {
+    format,
+    dataPath: file,
+    datatype,
+    sampleRateHz,
+    dataOffset: 0,
+    dataLengthBytes: size,
+    centerFrequencyHz: null,
+  };
 }
 
 function guessFormat(detected: string, file: string): IqFormat {
@@ -55,8 +72,11 @@ function guessFormat(detected: string, file: string): IqFormat {
   if (detected === 'wav') return 'wav';
   if (detected === 'raw-cf32') return 'cf32';
   if (detected === 'raw-ci16') return 'ci16';
-  if (detected === 'sigmf-archive') throw inputError(`${file}: SigMF archives (.sigmf) must be unpacked first`);
-  throw usageError(`${file}: cannot tell the format; give --format sigmf|wav|cf32|ci16 (and --rate for raw)`);
+  if (detected === 'sigmf-archive') {
+    throw inputError(`${file}: SigMF archives (.sigmf) must be unpacked first`);
+  }
+  const hint = 'give --format sigmf|wav|cf32|ci16 (and --rate for raw)';
+  throw usageError(`${file}: cannot tell the format; ${hint}`);
 }
 
 async function openSigmf(file: string): Promise<IqSource> {
@@ -69,7 +89,8 @@ async function openSigmf(file: string): Promise<IqSource> {
   try {
     size = (await fs.stat(dataPath)).size;
   } catch {
-    throw inputError(`${path.basename(metaPath)}: its dataset ${path.basename(dataPath)} is missing`);
+    const missing = path.basename(dataPath);
+    throw inputError(`${path.basename(metaPath)}: its dataset ${missing} is missing`);
   }
   return {
     format: 'sigmf',

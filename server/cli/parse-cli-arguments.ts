@@ -48,7 +48,8 @@ export function parseCliArguments(argv: string[], syntax: CommandSyntax): Parsed
   }
   if (parsed.positional.length !== syntax.positional.length) {
     const wanted = syntax.positional.map((p) => p.toUpperCase()).join(' ') || 'no arguments';
-    throw usageError(`${syntax.command}: expected ${wanted}, got ${parsed.positional.length} argument(s)`);
+    const got = parsed.positional.length;
+    throw usageError(`${syntax.command}: expected ${wanted}, got ${got} argument(s)`);
   }
   return parsed;
 }
@@ -74,8 +75,11 @@ export function numberOption(
   if (text === undefined) return undefined;
   const value = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(text.trim()) ? Number(text) : NaN;
   const { min = -Infinity, max = Infinity, integer = false } = bounds;
-  if (!Number.isFinite(value) || value < min || value > max || (integer && !Number.isInteger(value))) {
-    const range = `${integer ? 'a whole number' : 'a number'}${min > -Infinity ? ` >= ${min}` : ''}${max < Infinity ? ` <= ${max}` : ''}`;
+  const whole = !integer || Number.isInteger(value);
+  if (!Number.isFinite(value) || value < min || value > max || !whole) {
+    const lower = min > -Infinity ? ` >= ${min}` : '';
+    const upper = max < Infinity ? ` <= ${max}` : '';
+    const range = `${integer ? 'a whole number' : 'a number'}${lower}${upper}`;
     throw usageError(`--${name} must be ${range}, got "${text}"`);
   }
   return value;

@@ -59,8 +59,11 @@ export async function readMaskFile(file: string): Promise<EmissionMask> {
       error?.keyword === 'additionalProperties'
         ? `unknown member "${String(error.params['additionalProperty'])}"`
         : (error?.message ?? 'is invalid');
-    throw inputError(`${name}: ${where} ${detail} (expected {"reference":"pep"|"mean","vertices":[[offsetHz, relDb<=0], ...]})`);
+    const expected = '{"reference":"pep"|"mean","vertices":[[offsetHz, relDb<=0], ...]}';
+    throw inputError(`${name}: ${where} ${detail} (expected ${expected})`);
   }
   const mask = document as unknown as EmissionMask & { name?: string };
-  return { reference: mask.reference, vertices: mask.vertices, exemptWithinOffsetHz: mask.exemptWithinOffsetHz };
+  const { reference, vertices, exemptWithinOffsetHz } = mask;
+  const exempt = exemptWithinOffsetHz !== undefined && { exemptWithinOffsetHz };
+  return { reference, vertices, ...exempt };
 }

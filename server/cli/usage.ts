@@ -1,5 +1,5 @@
 /** The `--help` text: the command line's contract with bench automation, kept in one place. */
-export const USAGE = `sidecheck - SSB transmitter measurements from I/Q recordings and spectrum traces
+export const USAGE = `sidecheck - SSB transmitter measurements from I/Q captures and spectrum traces
 
 Usage:
   sidecheck analyze-iq FILE [--sideband usb|lsb|auto] [--full-scale-dbm DBM]

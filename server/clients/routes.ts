@@ -58,5 +58,21 @@ export function clientRoutes(): RouteDef[] {
         return presentClient(c);
       },
     }),
+    route<CreateClientBody>({
+      method: 'put',
+      path: '/clients/:id',
+      summary: 'Replace a client record; audited with before and after (issued reports keep the details they were issued with)',
+      access: { kind: 'member', roles: ['lab-admin', 'engineer'] },
+      bodySchema: createClientSchema,
+      async handler(ctx) {
+        const c = await Client.findByPk(ctx.params.id);
+        if (!c) throw notFound('The client');
+        const before = presentClient(c);
+        // invoiceLater is optional in the body; leaving it out keeps the lab's billing choice as it was.
+        await c.update({ ...ctx.body, invoiceLater: ctx.body.invoiceLater ?? c.invoiceLater });
+        await audit(ctx, { action: 'update', entity: 'client', entityId: c.id, before, after: presentClient(c) });
+        return presentClient(c);
+      },
+    }),
   ];
 }

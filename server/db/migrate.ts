@@ -1,9 +1,10 @@
 import { Umzug, SequelizeStorage } from 'umzug';
 import type { Sequelize } from 'sequelize';
 import { migration as foundation } from './migrations/0001-foundation';
+import { migration as equipment } from './migrations/0003-equipment';
 
 /** Every migration, in order. Add a new file under migrations/ and append it here. */
-const MIGRATIONS = [foundation];
+const MIGRATIONS = [foundation, equipment];
 
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({

@@ -1,11 +1,15 @@
 import { Op } from 'sequelize';
-import { Client, Device } from '../db/models';
+import { Device } from '../db/models';
 import { route, type RouteDef } from '../http/route';
-import { notFound, validationFailed } from '../http/problem';
+import { conflict, notFound } from '../http/problem';
 import { page, readListQuery } from '../http/list-query';
 import { createDeviceSchema, type CreateDeviceBody } from '../../shared/schemas/records';
-import { parseEmissionDesignator } from '../../shared/bandwidth/emission-designator';
 import { audit } from '../audit/audit';
+import { checkDevice } from './device-checks';
+import { issuedReportOfDevice } from './issued-report-of-device';
+
+/** How a report identifies the item tested (ISO/IEC 17025:2017 7.8.2.1 g): fixed once a report is issued. */
+const IDENTIFICATION = ['manufacturer', 'model', 'serialNumber'] as const;
 
 export function presentDevice(d: Device) {
   return {
@@ -66,19 +70,33 @@ export function deviceRoutes(): RouteDef[] {
       bodySchema: createDeviceSchema,
       async handler(ctx) {
         const b = ctx.body;
-        if (b.frequencyMaxHz < b.frequencyMinHz) {
-          throw validationFailed('The highest frequency is below the lowest.', [{ pointer: '/frequencyMaxHz', message: 'must be at least the lowest frequency' }]);
-        }
-        try {
-          parseEmissionDesignator(b.emissionDesignator);
-        } catch (error) {
-          throw validationFailed(`The emission designator is not valid: ${(error as Error).message}`, [{ pointer: '/emissionDesignator', message: 'is not a valid designator such as 2K70J3E' }]);
-        }
-        if (!(await Client.findByPk(b.clientId))) {
-          throw validationFailed('The client does not exist.', [{ pointer: '/clientId', message: 'is not one of your clients' }]);
-        }
+        await checkDevice(b);
         const d = await Device.create({ ...b, firmware: b.firmware ?? null, condition: b.condition || 'As received, no visible damage', organizationId: ctx.organizationId! });
         await audit(ctx, { action: 'create', entity: 'device', entityId: d.id, after: presentDevice(d) });
+        return presentDevice(d);
+      },
+    }),
+    route<CreateDeviceBody>({
+      method: 'put',
+      path: '/devices/:id',
+      summary: 'Replace a device record; once a report is issued on it, its manufacturer, model and serial number stay as issued',
+      access: { kind: 'member', roles: ['lab-admin', 'engineer'] },
+      bodySchema: createDeviceSchema,
+      async handler(ctx) {
+        const d = await Device.findByPk(ctx.params.id);
+        if (!d) throw notFound('The device');
+        const b = ctx.body;
+        await checkDevice(b);
+        const changed = IDENTIFICATION.filter((field) => b[field] !== d[field]);
+        if (changed.length) {
+          const reportNumber = await issuedReportOfDevice(ctx.organizationId!, d.id);
+          if (reportNumber) {
+            throw conflict(`Report ${reportNumber} was issued on this device, so its ${changed.join(', ')} must stay as issued. Register the item again if it really is a different one.`, { code: 'device-identification-locked' });
+          }
+        }
+        const before = presentDevice(d);
+        await d.update({ ...b, firmware: b.firmware ?? null, condition: b.condition || 'As received, no visible damage' });
+        await audit(ctx, { action: 'update', entity: 'device', entityId: d.id, before, after: presentDevice(d) });
         return presentDevice(d);
       },
     }),

@@ -6,7 +6,7 @@ let t: TestApp;
 beforeAll(async () => {
   t = await startTestApp();
 });
-afterAll(() => t.close());
+afterAll(() => t?.close());
 
 test('GET /api/openapi.json describes every route with its body schema (OpenAPI 3.1)', async () => {
   const res = await request(t.app).get('/api/openapi.json');

@@ -4,7 +4,7 @@
  * change sends nothing. Delivery is at least once (pg-boss re-delivers an expired job).
  */
 import PgBoss from 'pg-boss';
-import type { Sequelize, Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import type { Mailer, OutgoingMail } from './mailer';
 
 export const MAIL_QUEUE = 'mail';
@@ -27,14 +27,12 @@ export async function startMailQueue(databaseUrl: string, options: { retryDelayS
 }
 
 /** Enqueue within a Sequelize transaction, so the mail exists exactly when the change commits. */
-export async function enqueueMail(boss: PgBoss, sequelize: Sequelize, transaction: Transaction | null, mail: OutgoingMail): Promise<void> {
-  const db = {
-    executeSql: async (text: string, values: unknown[]) => {
-      const [rows] = await sequelize.query(text, { bind: values, transaction: transaction ?? undefined });
-      return { rows: rows as unknown[] };
-    },
-  };
-  await boss.send(MAIL_QUEUE, mail as unknown as object, { db });
+export async function enqueueMail(boss: PgBoss, transaction: Transaction | null, mail: OutgoingMail): Promise<void> {
+  // pg-boss runs its INSERT on the transaction's own connection (pg's numbered parameters go to
+  // pg unchanged), so the job commits or rolls back with the change that caused it.
+  const connection = (transaction as unknown as { connection?: { query(text: string, values: unknown[]): Promise<{ rows: unknown[] }> } } | null)?.connection;
+  const db = connection ? { executeSql: (text: string, values: unknown[]) => connection.query(text, values) } : undefined;
+  await boss.send(MAIL_QUEUE, mail as unknown as object, db ? { db } : {});
 }
 
 export async function startMailWorker(boss: PgBoss, mailer: Mailer): Promise<string> {

@@ -13,7 +13,7 @@ import { nextCounter } from '../runs/run-number';
 import { presentRun } from '../runs/run-presenter';
 import { buildReportDocument } from './build-report-document';
 import { activeSigningIdentity } from './signing-identity-store';
-import { renderSignedReport } from '../../templates/report/render-signed-report';
+import { renderSignedReport } from '../signing/render-signed-documents';
 import { reportIssuedEmail } from '../../templates/email/report-issued';
 import type { Verdict } from '../../shared/uncertainty/decision-rule';
 

@@ -1,6 +1,6 @@
 import { Organization, SigningIdentity } from '../db/models';
 import { decryptPrivateKey, encryptPrivateKey } from '../signing/private-key-encryption';
-import { generateLabSigningIdentity } from '../signing/lab-identity';
+import { generateLabSigningIdentity } from '../signing/generate-lab-signing-identity';
 
 /** The lab's active signing identity, generated on first use when the lab has none. */
 export async function activeSigningIdentity(organizationId: string, masterKey: string) {

@@ -5,6 +5,8 @@ import { badRequest } from '../http/problem';
 import { createRunSchema, reasonSchema, saveReadingSchema, type SaveReadingBody } from '../../shared/schemas/records';
 import { RUN_STATES, type RunAction } from '../../shared/runs/run-state';
 import { createRun, loadRun, runDetail, saveReading, transition } from './run-service';
+import { runInstrumentsSchema, type RunInstrumentsBody } from '../../shared/schemas/instruments';
+import { setRunInstruments } from '../instruments/run-instruments';
 
 const LAB = ['lab-admin', 'engineer', 'reviewer', 'billing'] as const;
 const SORT_COLUMNS: Record<string, string> = { number: 'r.number', state: 'r.state', updatedAt: 'r.updated_at', createdAt: 'r.created_at', model: 'd.model', client: 'c.name' };
@@ -92,6 +94,18 @@ export function runRoutes(sequelize: Sequelize): RouteDef[] {
       bodySchema: saveReadingSchema,
       async handler(ctx) {
         return saveReading(ctx, await loadRun(ctx.params.id), ctx.params.caseId, ctx.body.values);
+      },
+    }),
+    route<RunInstrumentsBody>({
+      method: 'put',
+      path: '/runs/:id/instruments',
+      summary: 'Set the instruments used on the run (each must be in calibration); their contributions join the uncertainty budgets',
+      access: { kind: 'member', roles: ['lab-admin', 'engineer'] },
+      bodySchema: runInstrumentsSchema,
+      async handler(ctx) {
+        const run = await loadRun(ctx.params.id);
+        await setRunInstruments(ctx, run, ctx.body.instrumentIds);
+        return runDetail(run);
       },
     }),
     act('submit', ['lab-admin', 'engineer'], 'Send the run for technical review'),

@@ -9,10 +9,12 @@ import type { RouteContext } from '../http/route';
 import { nextState, type RunAction } from '../../shared/runs/run-state';
 import { evaluateTestCase, EvaluationError } from '../../shared/evaluation/evaluate-test-case';
 import { ENGINE_VERSION } from '../../shared/engine-version';
-import type { ReadingValues } from '../../shared/evaluation/reading-fields';
+import { READING_FIELDS, type ReadingValues } from '../../shared/evaluation/reading-fields';
 import { audit } from '../audit/audit';
 import { nextCounter } from './run-number';
 import { presentResult, presentRun } from './run-presenter';
+import { assignedInstruments, contributionsByBudget, presentRunInstrument, refuseOverdue } from '../instruments/run-instruments';
+import { todayIso } from '../instruments/calibration-status';
 
 export async function loadRun(id: string) {
   const run = await TestRun.findByPk(id);
@@ -27,8 +29,11 @@ export async function runDetail(run: TestRun) {
   const cases = await TestCase.findAll({ where: { planId: plan.id }, order: [['position', 'ASC']] });
   const readings = await Reading.findAll({ where: { runId: run.id }, order: [['createdAt', 'DESC']] });
   const results = await Result.findAll({ where: { runId: run.id }, order: [['createdAt', 'DESC']] });
+  const instruments = await assignedInstruments(run.id);
+  const today = todayIso();
   return {
     ...presentRun(run),
+    instruments: instruments.map((i) => presentRunInstrument(i, today)),
     plan: { id: plan.id, name: plan.name, ruleSet: plan.ruleSetSnapshot },
     device: { id: device.id, manufacturer: device.manufacturer, model: device.model, serialNumber: device.serialNumber, emissionDesignator: device.emissionDesignator, ratedPepW: device.ratedPepW },
     client: { id: client.id, name: client.name, contactName: client.contactName, contactEmail: client.contactEmail },
@@ -69,12 +74,15 @@ export async function saveReading(ctx: RouteContext, run: TestRun, caseId: strin
   const testCase = await TestCase.findOne({ where: { id: caseId, planId: run.planId } });
   if (!testCase) throw notFound('The test case');
   const plan = (await TestPlan.findByPk(run.planId))!;
+  checkReadingShape(testCase.kind, values);
+  const instruments = await assignedInstruments(run.id);
+  refuseOverdue(instruments, todayIso(), 'Replace or recalibrate it before saving readings with it.');
   // The entered values are kept unchanged even when they do not evaluate yet: nothing typed is lost.
   const reading = await Reading.create({ organizationId: run.organizationId, runId: run.id, testCaseId: testCase.id, values, enteredBy: ctx.principal?.userId ?? null });
   let result: Result | null = null;
   let problem: string | null = null;
   try {
-    const r = evaluateTestCase({ kind: testCase.kind, readings: values, rules: plan.ruleSetSnapshot });
+    const r = evaluateTestCase({ kind: testCase.kind, readings: values, rules: plan.ruleSetSnapshot, instrumentContributions: contributionsByBudget(instruments) });
     result = await Result.create({
       organizationId: run.organizationId,
       runId: run.id,
@@ -88,7 +96,7 @@ export async function saveReading(ctx: RouteContext, run: TestRun, caseId: strin
       expandedUncertainty: r.uncertainty.expanded,
       coverageFactor: r.uncertainty.coverageFactor,
       verdict: r.verdict,
-      detail: { limitText: r.limitText, direction: r.direction, decisionRuleText: r.decisionRuleText, budget: r.uncertainty.rows, inputs: r.detail, combinedStandard: r.uncertainty.combinedStandard } as Record<string, unknown>,
+      detail: { limitText: r.limitText, direction: r.direction, decisionRuleText: r.decisionRuleText, budget: r.uncertainty.rows, inputs: r.detail, combinedStandard: r.uncertainty.combinedStandard, instruments: instruments.map((i) => ({ id: i.id, name: i.name, serialNumber: i.serialNumber, calibrationDue: i.calibrationDue, certificateRef: i.certificateRef })) } as Record<string, unknown>,
     });
   } catch (error) {
     if (!(error instanceof EvaluationError) && !(error instanceof RangeError) && !(error instanceof TypeError)) throw error;
@@ -97,6 +105,22 @@ export async function saveReading(ctx: RouteContext, run: TestRun, caseId: strin
   await run.update({ testedTo: new Date().toISOString().slice(0, 10) });
   await audit(ctx, { action: 'save-reading', entity: 'test-run', entityId: run.id, after: { testCaseId: testCase.id, values, verdict: result?.verdict ?? null } });
   return { reading: { id: reading.id, values: reading.values, createdAt: reading.createdAt.toISOString() }, result: result && presentResult(result), problem };
+}
+
+/** Numeric fields take numbers (or null while not yet read); only the fields of the kind, and a note. */
+function checkReadingShape(kind: TestCase['kind'], values: ReadingValues): void {
+  const fields = READING_FIELDS[kind];
+  const errors: { pointer: string; message: string }[] = [];
+  for (const [key, value] of Object.entries(values)) {
+    if (key === 'note') {
+      if (value !== null && typeof value !== 'string') errors.push({ pointer: `/values/note`, message: 'must be text' });
+      continue;
+    }
+    const field = fields.find((f) => f.key === key);
+    if (!field) errors.push({ pointer: `/values/${key}`, message: `is not a reading of ${kind}` });
+    else if (value !== null && typeof value !== 'number') errors.push({ pointer: `/values/${key}`, message: `${field.label} must be a number in ${field.unit}` });
+  }
+  if (errors.length) throw validationFailed(`The reading has ${errors.length} problem${errors.length === 1 ? '' : 's'}: ${errors[0].pointer} ${errors[0].message}.`, errors);
 }
 
 async function enteredBy(run: TestRun): Promise<string[]> {
@@ -113,6 +137,7 @@ export async function transition(ctx: RouteContext, run: TestRun, action: RunAct
     const detail = await runDetail(run);
     const missing = detail.testCases.filter((c) => !c.result);
     if (missing.length) throw conflict(`Every test case needs a computed result before review; missing: ${missing.map((c) => c.label).join(', ')}.`, { code: 'results-missing' });
+    refuseOverdue(await assignedInstruments(run.id), todayIso(), 'Repeat the affected measurements with calibrated equipment before review.');
   }
   if (action === 'approve') {
     // Four eyes: the person who authorizes must not be one who measured (ISO/IEC 17025:2017 7.8.1.1).

@@ -8,7 +8,7 @@ let t: TestApp;
 beforeAll(async () => {
   t = await startTestApp();
 });
-afterAll(() => t.close());
+afterAll(() => t?.close());
 
 async function setup() {
   const s = await buildLabScenario(t.sequelize);

@@ -9,7 +9,7 @@ let t: TestApp;
 beforeAll(async () => {
   t = await startTestApp();
 });
-afterAll(() => t.close());
+afterAll(() => t?.close());
 
 describe('tenant isolation', () => {
   it('a lab never sees, and cannot address, another lab’s records (404, not 403)', async () => {

@@ -17,16 +17,21 @@ import { complexFftOfSize, isPowerOfTwo } from './fft';
  * 1e-15·log2(M) relative to the largest component.
  * Domain: re and im of equal length ≥ 1 (not checked here: internal to this package's callers).
  *
- * @example const re = Float64Array.of(1, 2, 3), im = new Float64Array(3); anyLengthDft(re, im, 'forward');
- * // re ≈ [6, -1.5, -1.5], im ≈ [0, 0.866, -0.866]
+ * @example
+ * const re = Float64Array.of(1, 2, 3), im = new Float64Array(3);
+ * anyLengthDft(re, im, 'forward'); // re ≈ [6, -1.5, -1.5], im ≈ [0, 0.866, -0.866]
  */
-export function anyLengthDft(re: Float64Array, im: Float64Array, direction: 'forward' | 'inverse'): void {
+export function anyLengthDft(
+  re: Float64Array,
+  im: Float64Array,
+  direction: 'forward' | 'inverse',
+): void {
   const n = re.length;
   const sign = direction === 'forward' ? 1 : -1;
   if (isPowerOfTwo(n)) {
     const fft = complexFftOfSize(n);
-    const a = new Float64Array(2 * n);
-    const b = new Float64Array(2 * n);
+    const a = fft.createBuffer();
+    const b = fft.createBuffer();
     for (let k = 0; k < n; k++) {
       a[2 * k] = re[k];
       a[2 * k + 1] = sign * im[k]; // inverse via conjugation: x = conj(DFT(conj(X)))/N
@@ -50,8 +55,9 @@ export function anyLengthDft(re: Float64Array, im: Float64Array, direction: 'for
     cRe[k] = Math.cos(angle);
     cIm[k] = -Math.sin(angle);
   }
-  const a = new Float64Array(2 * m);
-  const b = new Float64Array(2 * m);
+  // Plain arrays, as the Welch loop uses, keep fft.js monomorphic in one process.
+  const a = fft.createBuffer();
+  const b = fft.createBuffer();
   for (let k = 0; k < n; k++) {
     const xr = re[k];
     const xi = sign * im[k];
@@ -64,8 +70,8 @@ export function anyLengthDft(re: Float64Array, im: Float64Array, direction: 'for
       b[2 * (m - k) + 1] = -cIm[k];
     }
   }
-  const fa = new Float64Array(2 * m);
-  const fb = new Float64Array(2 * m);
+  const fa = fft.createBuffer();
+  const fb = fft.createBuffer();
   fft.forward(a, fa);
   fft.forward(b, fb);
   for (let k = 0; k < m; k++) {

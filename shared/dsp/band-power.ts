@@ -12,7 +12,9 @@ import { requirePowerSpectrum, type PowerSpectrum } from './power-spectrum';
  * Domain: finite fromHz ≤ toHz; a band that holds no bin centre gives 0.
  * Bad input: RangeError (TypeError for a malformed spectrum) starting with "bandPower".
  *
- * @example bandPower({ frequencyHz: Float64Array.of(0, 1, 2), psd: Float64Array.of(1, 2, 3), binWidthHz: 1 }, 1, 2); // 5
+ * @example
+ * const psd = Float64Array.of(1, 2, 3);
+ * bandPower({ frequencyHz: Float64Array.of(0, 1, 2), psd, binWidthHz: 1 }, 1, 2); // 5
  */
 export function bandPower(spectrum: PowerSpectrum, fromHz: number, toHz: number): number {
   const fn = 'bandPower';

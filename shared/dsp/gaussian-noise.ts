@@ -1,4 +1,5 @@
 import { createMulberry32 } from './mulberry32';
+import type { SampleArray } from './windowed-segmenter';
 
 /**
  * Seeded complex white Gaussian noise: each call fills i[k], q[k] (k in [from, from + count))
@@ -11,14 +12,18 @@ import { createMulberry32 } from './mulberry32';
  * Domain: powerLinear finite ≥ 0; seed an integer.
  * Bad input: RangeError starting with "createComplexNoise".
  *
- * @example const noise = createComplexNoise({ powerLinear: 1e-6, seed: 7 }); noise.addTo(i, q, 0, i.length);
+ * @example
+ * const noise = createComplexNoise({ powerLinear: 1e-6, seed: 7 });
+ * noise.addTo(i, q, 0, i.length); // adds −60 dBFS of noise to i, q
  */
 export function createComplexNoise(options: { powerLinear: number; seed: number }): {
-  addTo(i: Float32Array | Float64Array, q: Float32Array | Float64Array, from: number, count: number): void;
+  addTo(i: SampleArray, q: SampleArray, from: number, count: number): void;
 } {
   const p = options.powerLinear;
   if (typeof p !== 'number' || !Number.isFinite(p) || p < 0) {
-    throw new RangeError(`createComplexNoise: powerLinear must be finite and ≥ 0, got ${String(p)}`);
+    throw new RangeError(
+      `createComplexNoise: powerLinear must be finite and ≥ 0, got ${String(p)}`,
+    );
   }
   if (!Number.isInteger(options.seed)) {
     throw new RangeError(`createComplexNoise: seed must be an integer, got ${options.seed}`);

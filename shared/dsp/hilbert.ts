@@ -62,7 +62,10 @@ function analytic(fn: string, x: ArrayLike<number>): ComplexSamples {
  *
  * @example realToIq([1, 2, 3, 4], 'lsb'); // { i: [1, 2, 3, 4], q: [-1, 1, 1, -1] }
  */
-export function realToIq(x: ArrayLike<number>, sideband: 'usb' | 'lsb' = 'usb'): ComplexSamples<Float32Array> {
+export function realToIq(
+  x: ArrayLike<number>,
+  sideband: 'usb' | 'lsb' = 'usb',
+): ComplexSamples<Float32Array> {
   if (sideband !== 'usb' && sideband !== 'lsb') {
     throw new RangeError(`realToIq: sideband must be 'usb' or 'lsb', got ${String(sideband)}`);
   }

@@ -36,11 +36,3 @@ export function requirePowerSpectrum(fnName: string, spectrum: PowerSpectrum): P
   return spectrum;
 }
 
-/**
- * Index of the bin whose centre is nearest `frequencyHz` on the uniform grid of `spectrum`, or
- * −1 when the frequency lies more than half a bin outside the grid.
- */
-export function nearestBinIndex(spectrum: PowerSpectrum, frequencyHz: number): number {
-  const k = Math.round((frequencyHz - spectrum.frequencyHz[0]) / spectrum.binWidthHz);
-  return k >= 0 && k < spectrum.psd.length ? k : -1;
-}

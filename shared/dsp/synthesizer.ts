@@ -1,6 +1,7 @@
 import { createComplexNoise } from './gaussian-noise';
 import type { ComplexSamples } from './hilbert';
-import { planSsbSignal, type SsbPlan, type SsbSignalSpec, type SsbTruth } from './ssb-signal-spec';
+import { planSsbSignal, type SsbPlan } from './plan-ssb-signal';
+import type { SsbSignalSpec, SsbTruth } from './ssb-signal-spec';
 
 /** A long synthesized capture delivered in chunks; truth().pepLinear covers the chunks so far. */
 export interface SsbSignalStream {
@@ -24,7 +25,8 @@ export interface SsbSignalStream {
  * (published); intermod product frequencies f1 − kΔ, f2 + kΔ (common practice).
  * Oscillators: each chunk restarts every phasor from an exact cos/sin of its phase at the chunk's
  * first sample, then rotates it by e^(jω) per sample (drift < 1e-11 over a chunk).
- * Domain and bad input: see planSsbSignal; chunkLength an integer ≥ 1 (default 65536).
+ * * Domain and bad input: see SsbSignalSpec (levels finite, frequencies within ±fs/2, |phase error|
+ * < 90°, intermod only with two tones, integer seed); chunkLength an integer ≥ 1 (default 65536).
  * RangeErrors start with "createSsbSignalStream".
  *
  * @example
@@ -32,14 +34,20 @@ export interface SsbSignalStream {
  *   tones: [{ audioHz: 1100, levelDbfs: -12 }, { audioHz: 1700, levelDbfs: -12 }] });
  * for (let c = s.next(); c; c = s.next()) analyzer.push(c.i, c.q);
  */
-export function createSsbSignalStream(spec: SsbSignalSpec, options: { chunkLength?: number } = {}): SsbSignalStream {
+export function createSsbSignalStream(
+  spec: SsbSignalSpec,
+  options: { chunkLength?: number } = {},
+): SsbSignalStream {
   const fn = 'createSsbSignalStream';
   const plan = planSsbSignal(fn, spec);
   const chunkLength = options.chunkLength ?? 65536;
   if (!Number.isInteger(chunkLength) || chunkLength < 1) {
     throw new RangeError(`${fn}: chunkLength must be an integer ≥ 1, got ${chunkLength}`);
   }
-  const noise = spec.noise === undefined ? null : createComplexNoise({ powerLinear: plan.truth.noisePowerLinear, seed: spec.noise.seed });
+  const noise =
+    spec.noise === undefined
+      ? null
+      : createComplexNoise({ powerLinear: plan.truth.noisePowerLinear, seed: spec.noise.seed });
   let position = 0;
   let pepLinear = 0;
   return {
@@ -61,9 +69,13 @@ export function createSsbSignalStream(spec: SsbSignalSpec, options: { chunkLengt
 /**
  * The whole capture at once: {@link createSsbSignalStream} with one chunk. Bad input as there,
  * messages starting with "synthesizeSsb".
- * @example synthesizeSsb({ sampleRateHz: 48000, sampleCount: 48000, sideband: 'usb', tones: [{ audioHz: 1000, levelDbfs: 0 }], phaseErrorDeg: 1 }).truth.imageRejectionDb; // 41.18
+ * @example
+ * synthesizeSsb({ sampleRateHz: 48000, sampleCount: 48000, sideband: 'usb',
+ *   tones: [{ audioHz: 1000, levelDbfs: 0 }], phaseErrorDeg: 1 }).truth.imageRejectionDb; // 41.18
  */
-export function synthesizeSsb(spec: SsbSignalSpec): ComplexSamples<Float32Array> & { truth: SsbTruth } {
+export function synthesizeSsb(
+  spec: SsbSignalSpec,
+): ComplexSamples<Float32Array> & { truth: SsbTruth } {
   planSsbSignal('synthesizeSsb', spec);
   const stream = createSsbSignalStream(spec, { chunkLength: spec.sampleCount });
   const chunk = stream.next() as ComplexSamples<Float32Array>;
@@ -77,17 +89,13 @@ function renderNoiseless(plan: SsbPlan, start: number, i: Float32Array, q: Float
   const re = new Float64Array(count);
   const im = new Float64Array(count);
   for (const tone of plan.modulatorTones) {
-    forEachPhasor(tone.audioHz / fs, tone.phaseRad, start, count, (k, c, s) => {
-      re[k] += tone.amplitude * c;
-      // sin(α + φ) = sin α·cos φ + cos α·sin φ; the sideband sign flips the Q path.
-      im[k] += plan.sideSign * (tone.qCos * s + tone.qSin * c);
-    });
+    // I = A·cos α, Q = ±g·A·sin(α + φ) = ±(g·A·cos φ·sin α + g·A·sin φ·cos α).
+    const qc = plan.sideSign * tone.qSin;
+    const qs = plan.sideSign * tone.qCos;
+    addPhasor(re, im, tone.audioHz / fs, tone.phaseRad, start, tone.amplitude, 0, qc, qs);
   }
   for (const line of plan.addedLines) {
-    forEachPhasor(line.frequencyHz / fs, 0, start, count, (k, c, s) => {
-      re[k] += line.amplitude * c;
-      im[k] += line.amplitude * s;
-    });
+    addPhasor(re, im, line.frequencyHz / fs, 0, start, line.amplitude, 0, 0, line.amplitude);
   }
   let peak = 0;
   for (let k = 0; k < count; k++) {
@@ -98,23 +106,31 @@ function renderNoiseless(plan: SsbPlan, start: number, i: Float32Array, q: Float
   return peak;
 }
 
-/** Calls visit(k, cos, sin) of 2π·cycles·(start + k) + phase for k = 0 … count − 1. */
-function forEachPhasor(
+/**
+ * Adds re[k] += ic·cos α + is·sin α and im[k] += qc·cos α + qs·sin α, α = 2π·ν·(start + k) + θ.
+ * The phasor (cos α, sin α) starts from an exact cos/sin and is then rotated by e^(j2πν).
+ */
+function addPhasor(
+  re: Float64Array,
+  im: Float64Array,
   cyclesPerSample: number,
   phaseRad: number,
   start: number,
-  count: number,
-  visit: (k: number, c: number, s: number) => void,
+  ic: number,
+  is: number,
+  qc: number,
+  qs: number,
 ): void {
-  // Whole cycles dropped before scaling keeps the start angle exact far into a long capture.
+  // Whole cycles dropped before scaling keep the start angle exact far into a long capture.
   const cycles = cyclesPerSample * start;
   const angle = 2 * Math.PI * (cycles - Math.floor(cycles)) + phaseRad;
   let c = Math.cos(angle);
   let s = Math.sin(angle);
   const dc = Math.cos(2 * Math.PI * cyclesPerSample);
   const ds = Math.sin(2 * Math.PI * cyclesPerSample);
-  for (let k = 0; k < count; k++) {
-    visit(k, c, s);
+  for (let k = 0; k < re.length; k++) {
+    re[k] += ic * c + is * s;
+    im[k] += qc * c + qs * s;
     const nc = c * dc - s * ds;
     s = s * dc + c * ds;
     c = nc;

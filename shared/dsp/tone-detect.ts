@@ -43,9 +43,14 @@ export interface ToneDetectOptions {
  * Domain: a valid spectrum; thresholdDb finite; halfWidthBins an integer ≥ 1; maxTones ≥ 1.
  * Bad input: RangeError (TypeError for a malformed spectrum) starting with "detectTones".
  *
- * @example detectTones(welchPsd(i, q, opts)); // [{ frequencyHz: 1000.2, powerLinear: 0.25, levelDb: -6.02 }]
+ * @example
+ * detectTones(welchPsd(i, q, options));
+ * // [{ frequencyHz: 1000.2, powerLinear: 0.25, levelDb: -6.02 }]
  */
-export function detectTones(spectrum: PowerSpectrum, options: ToneDetectOptions = {}): DetectedTone[] {
+export function detectTones(
+  spectrum: PowerSpectrum,
+  options: ToneDetectOptions = {},
+): DetectedTone[] {
   const fn = 'detectTones';
   const s = requirePowerSpectrum(fn, spectrum);
   const psd = s.psd;
@@ -71,6 +76,7 @@ export function detectTones(spectrum: PowerSpectrum, options: ToneDetectOptions 
   const first = Math.max(0, Math.ceil((fromHz - f0) / bw - 1e-9));
   const last = Math.min(n - 1, Math.floor((toHz - f0) / bw + 1e-9));
   const level = floor * 10 ** (threshold / 10);
+  const refine = options.refine ?? 'gaussian';
 
   const peaks: number[] = [];
   for (let k = first; k <= last; k++) {
@@ -86,7 +92,7 @@ export function detectTones(spectrum: PowerSpectrum, options: ToneDetectOptions 
   for (const k of peaks) {
     if (tones.length === maxTones) break;
     const offset =
-      k > 0 && k < n - 1 ? peakOffsetBins(psd[k - 1], psd[k], psd[k + 1], options.refine ?? 'gaussian') : 0;
+      k > 0 && k < n - 1 ? peakOffsetBins(psd[k - 1], psd[k], psd[k + 1], refine) : 0;
     const frequencyHz = f0 + (k + offset) * bw;
     if (tones.some((t) => Math.abs(t.frequencyHz - frequencyHz) < minSpacing)) continue;
     const powerLinear = lobePower(s, k, h);

@@ -1,12 +1,11 @@
-import { CompensatedSum } from '../units/compensated-sum';
 import { requirePositive } from '../units/number-guards';
 import { complexFftOfSize, isPowerOfTwo, type ComplexFft } from './fft';
 import type { PowerSpectrum } from './power-spectrum';
 import { WINDOW_COEFFICIENTS, windowCoefficients, type WindowName } from './window';
 import { windowMetrics } from './window-metrics';
+import { createWindowedSegmenter, type SampleArray } from './windowed-segmenter';
 
-/** Real sample arrays accepted by the streaming analysers. */
-export type SampleArray = Float32Array | Float64Array;
+export type { SampleArray };
 
 /** Options of a Welch PSD estimate. */
 export interface WelchOptions {
@@ -53,22 +52,26 @@ export interface WelchAccumulator {
  * Domain: sampleRateHz finite > 0; segmentLength a power of two ≥ 2; 0 ≤ overlap < 1.
  * Bad input: RangeError starting with "createWelchAccumulator"; push() with i, q of unequal length
  * or holding NaN/±Infinity, and result() before one full segment, throw RangeErrors starting with
- * "WelchAccumulator.push" / "WelchAccumulator.result".
+ * "WelchAccumulator.push" / "WelchAccumulator.result". A chunk that throws for a non-finite
+ * sample is kept up to the segment boundary before that sample; treat the estimate as spoilt.
  *
  * @example
  * const acc = createWelchAccumulator({ sampleRateHz: 48000, segmentLength: 1024 });
  * acc.push(i, q); acc.result().psd; // 1024 bins, −24000 Hz … +23953.125 Hz
  */
 export function createWelchAccumulator(options: WelchOptions): WelchAccumulator {
-  return buildWelch(options, {
+  return createNamedWelchAccumulator(options, {
     create: 'createWelchAccumulator',
     push: 'WelchAccumulator.push',
     result: 'WelchAccumulator.result',
   });
 }
 
-/** The accumulator, with the function names its error messages start with. */
-function buildWelch(
+/**
+ * {@link createWelchAccumulator} whose error messages start with the given names, for callers
+ * that wrap it (the IQ analyzer) and keep their own names in messages. Not re-exported.
+ */
+export function createNamedWelchAccumulator(
   options: WelchOptions,
   names: { create: string; push: string; result: string },
 ): WelchAccumulator {
@@ -90,81 +93,36 @@ function buildWelch(
   const metrics = windowMetrics(w);
   const hop = n - Math.floor(overlap * n);
   const fft: ComplexFft = complexFftOfSize(n);
-  const raw = new Float64Array(2 * n); // unwindowed samples of the current segment, interleaved
-  const windowed = new Float64Array(2 * n);
-  const spectrum = new Float64Array(2 * n);
+  const spectrum = fft.createBuffer();
   const sum = new Float64Array(n); // Σ |X[k]|² over segments, FFT order
-  let filled = 0;
   let segments = 0;
-  let pushed = 0;
-  // Per-fill partial sums into a compensated total: accurate over 10⁸ samples at no extra pass.
-  const energy = new CompensatedSum();
-  let peak = 0;
-
-  function processSegment(): void {
-    for (let k = 0, m = 0; k < n; k++, m += 2) {
-      const wk = w[k];
-      windowed[m] = raw[m] * wk;
-      windowed[m + 1] = raw[m + 1] * wk;
-    }
-    fft.forward(windowed, spectrum);
+  const segmenter = createWindowedSegmenter(w, hop, (segment) => {
+    fft.forward(segment, spectrum);
     for (let k = 0, m = 0; k < n; k++, m += 2) {
       const re = spectrum[m];
       const im = spectrum[m + 1];
       sum[k] += re * re + im * im;
     }
     segments++;
-    raw.copyWithin(0, 2 * hop, 2 * n);
-    filled = n - hop;
-  }
-
-  /**
-   * Copies samples into the segment buffer and adds them to the power sums; returns false
-   * (leaving every sum as it was) if any sample is NaN or ±Infinity.
-   */
-  function fill(i: SampleArray, q: SampleArray, from: number, count: number): boolean {
-    let sum = 0;
-    let top = 0;
-    for (let k = from, m = 2 * filled, end = from + count; k < end; k++, m += 2) {
-      const a = i[k];
-      const b = q[k];
-      raw[m] = a;
-      raw[m + 1] = b;
-      const p = a * a + b * b;
-      sum += p;
-      if (p > top) top = p;
-    }
-    // A NaN or ±Infinity sample makes the sum NaN or +Infinity: one check per fill.
-    if (!Number.isFinite(sum)) return false;
-    energy.add(sum);
-    if (top > peak) peak = top;
-    filled += count;
-    return true;
-  }
+  });
 
   function push(i: SampleArray, q: SampleArray): void {
     if (i.length !== q.length) {
       throw new RangeError(`${names.push}: i and q lengths differ (${i.length} vs ${q.length})`);
     }
-    let pos = 0;
-    const len = i.length;
-    while (pos < len) {
-      const take = Math.min(n - filled, len - pos);
-      if (!fill(i, q, pos, take)) {
-        let bad = pos;
-        while (Number.isFinite(i[bad]) && Number.isFinite(q[bad])) bad++;
-        throw new RangeError(`${names.push}: sample ${pushed + bad} is not finite`);
-      }
-      pos += take;
-      pushed += take;
-      if (filled === n) processSegment();
+    const chunkStart = segmenter.samplesPushed;
+    const bad = segmenter.push(i, q);
+    if (bad >= 0) {
+      throw new RangeError(
+        `${names.push}: sample ${chunkStart + bad} is not finite (or its |x|² overflows)`,
+      );
     }
   }
 
   function result(): WelchResult {
     if (segments === 0) {
       throw new RangeError(
-        `${names.result}: no complete segment yet (${pushed} of ${n} samples)`,
+        `${names.result}: no complete segment yet (${segmenter.samplesPushed} of ${n} samples)`,
       );
     }
     const binWidthHz = fs / n;
@@ -189,16 +147,16 @@ function buildWelch(
     push,
     result,
     get samplesPushed() {
-      return pushed;
+      return segmenter.samplesPushed;
     },
     get segmentsAveraged() {
       return segments;
     },
     get meanPower() {
-      return pushed === 0 ? 0 : energy.value / pushed;
+      return segmenter.meanPower;
     },
     get peakPower() {
-      return peak;
+      return segmenter.peakPower;
     },
   };
 }
@@ -210,7 +168,8 @@ function buildWelch(
  * @example welchPsd(i, q, { sampleRateHz: 1000, segmentLength: 16 }).binWidthHz; // 62.5
  */
 export function welchPsd(i: SampleArray, q: SampleArray, options: WelchOptions): WelchResult {
-  const acc = buildWelch(options, { create: 'welchPsd', push: 'welchPsd', result: 'welchPsd' });
+  const name = 'welchPsd';
+  const acc = createNamedWelchAccumulator(options, { create: name, push: name, result: name });
   acc.push(i, q);
   return acc.result();
 }

@@ -153,12 +153,17 @@ export function evaluateTestCase(input: {
   kind: TestKind;
   readings: ReadingValues;
   rules: RuleSetBody;
-  /** Extra contributions from the instruments used (their calibration certificates). */
-  instrumentContributions?: UncertaintyContribution[];
+  /**
+   * Extra contributions from the instruments used (their calibration certificates): a list joins
+   * the budget of the measured quantity; a record per budget adds only the entry of that budget.
+   */
+  instrumentContributions?: UncertaintyContribution[] | Partial<Record<Budget, UncertaintyContribution[]>>;
 }): TestCaseResult {
   requireReadings(input.readings, input.kind);
   const m = measure(input.kind, input.readings, input.rules);
-  const budget = [...(input.rules.uncertainty[m.budget] ?? []), ...(input.instrumentContributions ?? [])];
+  const extra = input.instrumentContributions;
+  const fromInstruments = Array.isArray(extra) ? extra : (extra?.[m.budget] ?? []);
+  const budget = [...(input.rules.uncertainty[m.budget] ?? []), ...fromInstruments];
   if (budget.length === 0) throw new EvaluationError(`The rule set has no uncertainty budget for ${m.unit} readings; add one before evaluating.`);
   const uncertainty = combineUncertainty(budget, { coverageFactor: 2 });
   const decision = applyDecisionRule({ value: m.value, limit: m.limit, direction: m.direction, expandedUncertainty: uncertainty.expanded, rule: input.rules.decisionRule });

@@ -10,12 +10,14 @@ describe('detectFileKind', () => {
   });
 
   it('recognises SigMF metadata by content or by name', () => {
-    expect(detectFileKind('x.json', text('  {"global": {"core:datatype": "cf32_le"}')).kind).toBe('sigmf-meta');
+    const meta = text('  {"global": {"core:datatype": "cf32_le"}');
+    expect(detectFileKind('x.json', meta).kind).toBe('sigmf-meta');
     expect(detectFileKind('x.sigmf-meta', text('{"captures": []')).kind).toBe('sigmf-meta');
   });
 
   it('recognises a trace CSV after comment lines', () => {
-    expect(detectFileKind('t.txt', text('# sweep\nfrequency_hz;level_dbm\n1;2\n')).kind).toBe('trace-csv');
+    const csv = text('# sweep\nfrequency_hz;level_dbm\n1;2\n');
+    expect(detectFileKind('t.txt', csv).kind).toBe('trace-csv');
   });
 
   it('tells binary I/Q by name only and tar archives by ustar at 257', () => {

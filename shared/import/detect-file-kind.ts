@@ -53,7 +53,9 @@ export function detectFileKind(name: string, firstBytes: Uint8Array): DetectedFi
   if (raw !== undefined) return { kind: raw, reason: `named .${extension}` };
 
   const text = printableText(firstBytes);
-  if (text === undefined) return { kind: 'unknown', reason: 'binary data without a known signature' };
+  if (text === undefined) {
+    return { kind: 'unknown', reason: 'binary data without a known signature' };
+  }
   if (/^\s*\{/.test(text) && (/"global"\s*:/.test(text) || extension === 'sigmf-meta')) {
     return { kind: 'sigmf-meta', reason: 'JSON object with a "global" member' };
   }
@@ -67,7 +69,7 @@ export function detectFileKind(name: string, firstBytes: Uint8Array): DetectedFi
   return { kind: 'unknown', reason: 'text that is neither SigMF metadata nor a delimited trace' };
 }
 
-/** The bytes as text when they look like UTF-8 text (no control bytes but tab/CR/LF), else undefined. */
+/** The bytes as text when they look like text (no control bytes but tab, CR, LF). */
 function printableText(bytes: Uint8Array): string | undefined {
   for (const byte of bytes) {
     if (byte < 0x20 && byte !== 9 && byte !== 10 && byte !== 13) return undefined;

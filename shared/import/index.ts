@@ -13,7 +13,13 @@ export { parseWavHeader, type WavHeader } from './parse-wav-header';
 export { rawIqDatatype } from './raw-iq-datatype';
 export { parseTraceCsv, type ImportedTrace } from './parse-trace-csv';
 export { classifyTraceColumn, type TraceColumn } from './trace-column';
-export { levelToDbm, normalizeUnit, isLevelUnit, FREQUENCY_UNIT_HZ, type LevelUnit } from './trace-units';
+export {
+  levelToDbm,
+  normalizeUnit,
+  isLevelUnit,
+  FREQUENCY_UNIT_HZ,
+  type LevelUnit,
+} from './trace-units';
 export { parseCsvNumber } from './parse-csv-number';
 export { detectFileKind, type FileKind, type DetectedFileKind } from './detect-file-kind';
 export { jsonSyntaxErrorOffset } from './json-syntax-error-offset';

@@ -22,7 +22,11 @@ function encode(name: string, codes: number[]): Uint8Array {
   return new Uint8Array(view.buffer);
 }
 
-function decodeInChunks(name: string, bytes: Uint8Array, cuts: number[]): { i: number[]; q: number[] } {
+function decodeInChunks(
+  name: string,
+  bytes: Uint8Array,
+  cuts: number[],
+): { i: number[]; q: number[] } {
   const decoder = createIqSampleDecoder(sigmfDatatypeFromName(name)!);
   const out: IqChunk[] = [];
   let from = 0;
@@ -53,7 +57,7 @@ describe('createIqSampleDecoder', () => {
     expect(got.i).toHaveLength(i.length);
   });
 
-  it('gives the same samples whatever single split point (every byte offset) cuts the stream', () => {
+  it('gives the same samples wherever a split (every byte offset) cuts the stream', () => {
     for (const name of ['cf32_le', 'ci16_be', 'cu8', 'cf64_le']) {
       const codes = name === 'cu8' ? [1, 2, 3, 250, 7, 9] : [0.5, -0.25, 3, -4, 100, -0];
       const bytes = encode(name, name.startsWith('cf') ? codes : codes.map((c) => Math.trunc(c)));
@@ -73,23 +77,25 @@ describe('createIqSampleDecoder', () => {
   });
 
   it('refuses a truncated stream at finish, naming where the partial sample starts', () => {
-    const decoder = createIqSampleDecoder(sigmfDatatypeFromName('cf32_le')!, { baseByteOffset: 44 });
+    const cf32 = sigmfDatatypeFromName('cf32_le')!;
+    const decoder = createIqSampleDecoder(cf32, { baseByteOffset: 44 });
     decoder.push(new Uint8Array(8 * 3 + 5));
     const error = captureError(() => decoder.finish());
     expect(error).toBeInstanceOf(ImportError);
     expect((error as ImportError).byteOffset).toBe(44 + 24);
-    expect((error as ImportError).message).toMatch(/^decodeIqSamples: byte offset 68: .*5 trailing/);
+    const message = (error as ImportError).message;
+    expect(message).toMatch(/^decodeIqSamples: byte offset 68: .*5 trailing/);
   });
 
-  it('refuses NaN and infinite float components with their byte offset, across a chunk split', () => {
+  it('refuses NaN and infinite components with their byte offset, across a split', () => {
     const bytes = encode('cf32_le', [0, 0, 0.5, NaN]);
     const decoder = createIqSampleDecoder(sigmfDatatypeFromName('cf32_le')!);
     decoder.push(bytes.subarray(0, 10));
     const error = captureError(() => decoder.push(bytes.subarray(10)));
     expect(error).toMatchObject({ name: 'ImportError', byteOffset: 12 });
     const inf = encode('cf64_be', [Infinity, 0]);
-    expect(captureError(() => createIqSampleDecoder(sigmfDatatypeFromName('cf64_be')!).push(inf)))
-      .toMatchObject({ byteOffset: 0 });
+    const cf64 = createIqSampleDecoder(sigmfDatatypeFromName('cf64_be')!);
+    expect(captureError(() => cf64.push(inf))).toMatchObject({ byteOffset: 0 });
   });
 
   it('never throws anything but ImportError on arbitrary bytes and splits (fuzz)', () => {

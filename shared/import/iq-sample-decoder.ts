@@ -109,7 +109,8 @@ export function createIqSampleDecoder(
     if (pendingLength > 0) {
       throw new ImportError(
         'decodeIqSamples',
-        `data ends inside a sample: ${pendingLength} trailing byte(s) of a ${bytesPerSample}-byte ${datatype.name} sample (truncated file?)`,
+        `data ends inside a sample: ${pendingLength} trailing byte(s) of a ` +
+          `${bytesPerSample}-byte ${datatype.name} sample (truncated file?)`,
         { byteOffset: consumedBytes - pendingLength },
       );
     }

@@ -34,7 +34,9 @@ type JsonObject = Record<string, unknown>;
  * offending key. A leading byte-order mark is accepted.
  *
  * @example
- * parseSigmfMeta('{"global":{"core:version":"1.0.0","core:datatype":"cf32_le","core:sample_rate":48000},"captures":[{"core:sample_start":0,"core:frequency":2182000}],"annotations":[]}')
+ * parseSigmfMeta(`{"global": {"core:version": "1.0.0", "core:datatype": "cf32_le",
+ *   "core:sample_rate": 48000}, "captures": [{"core:sample_start": 0, "core:frequency": 2182000}],
+ *   "annotations": []}`)
  * // { version: '1.0.0', datatype: { name: 'cf32_le', ... }, sampleRateHz: 48000,
  * //   captures: [{ sampleStart: 0, frequencyHz: 2182000 }], description: null }
  */
@@ -47,9 +49,11 @@ export function parseSigmfMeta(text: string): SigmfMeta {
     const offset = jsonSyntaxErrorOffset(body) ?? 0;
     throw new ImportError(NAME, 'not valid JSON', lineColumnAt(body, offset));
   }
-  const fail = (key: string, detail: string, search: { from?: number; occurrence?: number } = {}): never => {
+  type Search = { from?: number; occurrence?: number };
+  const fail = (key: string, detail: string, search: Search = {}): never => {
     const position = jsonKeyPosition(body, key, search);
-    throw new ImportError(NAME, detail, position ? { line: position.line, column: position.column } : {});
+    const location = position ? { line: position.line, column: position.column } : {};
+    throw new ImportError(NAME, detail, location);
   };
   if (!isObject(root)) {
     throw new ImportError(NAME, 'the file must hold a JSON object with "global" and "captures"', {
@@ -61,10 +65,14 @@ export function parseSigmfMeta(text: string): SigmfMeta {
   if (!isObject(global)) return fail('global', '"global" must be an object');
 
   const version = global['core:version'];
-  if (typeof version !== 'string') return fail('core:version', '"core:version" (string) is required');
+  if (typeof version !== 'string') {
+    return fail('core:version', '"core:version" (string) is required');
+  }
 
   const datatypeName = global['core:datatype'];
-  if (typeof datatypeName !== 'string') return fail('core:datatype', '"core:datatype" (string) is required');
+  if (typeof datatypeName !== 'string') {
+    return fail('core:datatype', '"core:datatype" (string) is required');
+  }
   const datatype = sigmfDatatypeFromName(datatypeName);
   if (datatype === undefined) {
     const why = isRealSigmfDatatype(datatypeName)
@@ -75,13 +83,16 @@ export function parseSigmfMeta(text: string): SigmfMeta {
 
   const sampleRateHz = global['core:sample_rate'];
   if (typeof sampleRateHz !== 'number' || !Number.isFinite(sampleRateHz) || sampleRateHz <= 0) {
-    return fail('core:sample_rate', '"core:sample_rate" must be a number of samples per second > 0');
+    const detail = '"core:sample_rate" must be a number of samples per second > 0';
+    return fail('core:sample_rate', detail);
   }
   const channels = global['core:num_channels'];
   if (channels !== undefined && channels !== 1) {
-    return fail('core:num_channels', '"core:num_channels" must be 1 (multi-channel files are not supported)');
+    const detail = '"core:num_channels" must be 1 (multi-channel files are not supported)';
+    return fail('core:num_channels', detail);
   }
-  const description = typeof global['core:description'] === 'string' ? global['core:description'] : null;
+  const rawDescription = global['core:description'];
+  const description = typeof rawDescription === 'string' ? rawDescription : null;
 
   const rawCaptures = root['captures'];
   if (!Array.isArray(rawCaptures)) return fail('captures', '"captures" must be an array');
@@ -104,8 +115,10 @@ export function parseSigmfMeta(text: string): SigmfMeta {
       return fail('core:sample_start', detail, at(index));
     }
     const frequencyHz = capture['core:frequency'];
-    if (frequencyHz !== undefined && (typeof frequencyHz !== 'number' || !Number.isFinite(frequencyHz))) {
-      return fail('core:frequency', `${where} "core:frequency" must be a number of hertz`, at(frequenciesSeen));
+    const badFrequency = typeof frequencyHz !== 'number' || !Number.isFinite(frequencyHz);
+    if (frequencyHz !== undefined && badFrequency) {
+      const detail = `${where} "core:frequency" must be a number of hertz`;
+      return fail('core:frequency', detail, at(frequenciesSeen));
     }
     if (frequencyHz !== undefined) frequenciesSeen++;
     if (capture['core:header_bytes'] !== undefined && capture['core:header_bytes'] !== 0) {

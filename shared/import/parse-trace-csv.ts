@@ -1,6 +1,6 @@
 import { ImportError } from './import-error';
 import { parseCsvNumber } from './parse-csv-number';
-import { classifyTraceColumn, type TraceColumn } from './trace-column';
+import { readTraceHeader, type TraceHeader } from './read-trace-header';
 import { FREQUENCY_UNIT_HZ, levelToDbm, normalizeUnit, type LevelUnit } from './trace-units';
 
 /** A spectrum trace in SI units, frequencies strictly ascending. */
@@ -13,8 +13,12 @@ export interface ImportedTrace {
 
 const NAME = 'parseTraceCsv';
 // `# RBW: 300 Hz`, `# rbw_hz=300`, `# RBW 3 kHz`: a unit before or after the number.
-const RBW_COMMENT =
-  /(?:^|[^a-z])rbw(?![a-z])[\s_]*(hz|khz|mhz)?\s*[:=]?\s*(\d*\.?\d+(?:e[+-]?\d+)?)\s*(hz|khz|mhz)?/i;
+const RBW_COMMENT = new RegExp(
+  '(?:^|[^a-z])rbw(?![a-z])[\\s_]*(hz|khz|mhz)?' + // the word, maybe a unit (rbw_hz)
+    '\\s*[:=]?\\s*(\\d*\\.?\\d+(?:e[+-]?\\d+)?)' + // the number
+    '\\s*(hz|khz|mhz)?', // maybe a unit after it
+  'i',
+);
 
 /**
  * Parses a spectrum-analyzer trace exported as CSV with a header row. The header names a
@@ -34,7 +38,7 @@ const RBW_COMMENT =
 export function parseTraceCsv(text: string): ImportedTrace {
   const lines = text.split(/\r\n|\n|\r/);
   let commentRbwHz: number | undefined;
-  let header: { columns: TraceColumn[]; delimiter: string; line: number } | undefined;
+  let header: TraceHeader | undefined;
   const frequencies: number[] = [];
   const levels: number[] = [];
   let rbwHz: number | undefined;
@@ -57,7 +61,7 @@ export function parseTraceCsv(text: string): ImportedTrace {
       continue;
     }
     if (header === undefined) {
-      header = readHeader(content, line);
+      header = readTraceHeader(content, line);
       freqIndex = header.columns.findIndex((c) => c.role === 'frequency');
       levelIndex = header.columns.findIndex((c) => c.role === 'level');
       rbwIndex = header.columns.findIndex((c) => c.role === 'rbw');
@@ -91,52 +95,35 @@ export function parseTraceCsv(text: string): ImportedTrace {
     }
     const previous = frequencies[frequencies.length - 1];
     if (previous !== undefined && !(frequencyHz > previous)) {
-      const detail = `frequency ${frequencyHz} Hz is not above the previous row's ${previous} Hz (rows must ascend in frequency)`;
+      const detail =
+        `frequency ${frequencyHz} Hz is not above the previous row's ${previous} Hz ` +
+        '(rows must ascend in frequency)';
       throw new ImportError(NAME, detail, { line, column: freqIndex + 1 });
     }
     if (rbwIndex >= 0) {
-      const rowRbwHz = number(rbwIndex, 'RBW') * (header.columns[rbwIndex] as { hzPerUnit: number }).hzPerUnit;
+      const rbwColumn = header.columns[rbwIndex] as { hzPerUnit: number };
+      const rowRbwHz = number(rbwIndex, 'RBW') * rbwColumn.hzPerUnit;
       if (rbwHz !== undefined && rowRbwHz !== rbwHz) {
-        throw new ImportError(NAME, `RBW changes from ${rbwHz} Hz to ${rowRbwHz} Hz within the trace`, {
-          line,
-          column: rbwIndex + 1,
-        });
+        const detail = `RBW changes from ${rbwHz} Hz to ${rowRbwHz} Hz within the trace`;
+        throw new ImportError(NAME, detail, { line, column: rbwIndex + 1 });
       }
       rbwHz = rowRbwHz;
     }
     frequencies.push(frequencyHz);
     levels.push(levelDbm);
   }
-  if (header === undefined) throw new ImportError(NAME, 'no header row (expected e.g. "frequency_hz,level_dbm")');
-  if (frequencies.length < 2) {
-    throw new ImportError(NAME, `${frequencies.length} data row(s); a trace needs at least 2`, { line: lines.length });
+  if (header === undefined) {
+    throw new ImportError(NAME, 'no header row (expected e.g. "frequency_hz,level_dbm")');
   }
-  const trace: ImportedTrace = { frequencyHz: Float64Array.from(frequencies), levelDbm: Float64Array.from(levels) };
+  if (frequencies.length < 2) {
+    const detail = `${frequencies.length} data row(s); a trace needs at least 2`;
+    throw new ImportError(NAME, detail, { line: lines.length });
+  }
+  const trace: ImportedTrace = {
+    frequencyHz: Float64Array.from(frequencies),
+    levelDbm: Float64Array.from(levels),
+  };
   const traceRbwHz = rbwHz ?? commentRbwHz;
   if (traceRbwHz !== undefined) trace.rbwHz = traceRbwHz;
   return trace;
-}
-
-function readHeader(content: string, line: number): { columns: TraceColumn[]; delimiter: string; line: number } {
-  const delimiter = content.includes(';') ? ';' : content.includes('\t') ? '\t' : ',';
-  const cells = content.split(delimiter);
-  const columns = cells.map(classifyTraceColumn);
-  const fail = (column: number, detail: string): never => {
-    throw new ImportError(NAME, detail, { line, column });
-  };
-  const unitless = columns.findIndex((c) => c.role === 'unitless');
-  if (unitless >= 0) {
-    const c = columns[unitless] as { quantity: string };
-    fail(unitless + 1, `header "${cells[unitless].trim()}" names a ${c.quantity} without a known unit (e.g. frequency_hz, "Level (dBm)")`);
-  }
-  for (const role of ['frequency', 'level', 'rbw'] as const) {
-    const at = columns.flatMap((c, index) => (c.role === role ? [index + 1] : []));
-    if (at.length > 1) fail(at[1], `columns ${at.join(' and ')} both look like ${role} columns; keep one`);
-  }
-  if (!Number.isNaN(parseCsvNumber(cells[0], delimiter !== ','))) {
-    fail(1, 'the first row is data; a header row such as "frequency_hz,level_dbm" is required');
-  }
-  if (!columns.some((c) => c.role === 'frequency')) fail(1, 'no frequency column (e.g. frequency_hz)');
-  if (!columns.some((c) => c.role === 'level')) fail(1, 'no level column (e.g. level_dbm)');
-  return { columns, delimiter, line };
 }

@@ -19,7 +19,9 @@ const FORMAT_PCM = 1;
 const FORMAT_FLOAT = 3;
 const FORMAT_EXTENSIBLE = 0xfffe;
 // KSDATAFORMAT_SUBTYPE_PCM / _IEEE_FLOAT: the format code, then the fixed GUID tail.
-const GUID_TAIL = [0x00, 0x00, 0x00, 0x00, 0x10, 0x00, 0x80, 0x00, 0x00, 0xaa, 0x00, 0x38, 0x9b, 0x71];
+const GUID_TAIL = [
+  0x00, 0x00, 0x00, 0x00, 0x10, 0x00, 0x80, 0x00, 0x00, 0xaa, 0x00, 0x38, 0x9b, 0x71,
+];
 
 /**
  * Parses the RIFF/WAVE header of a two-channel I/Q recording (I left, Q right), PCM 16-bit or
@@ -33,7 +35,9 @@ const GUID_TAIL = [0x00, 0x00, 0x00, 0x00, 0x10, 0x00, 0x80, 0x00, 0x00, 0xaa, 0
  *   (64 KiB is plenty for ordinary files).
  * @param fileLengthBytes the full file length in bytes.
  * @throws ImportError naming the byte offset of the field that is wrong.
- * @example parseWavHeader(first64k, 768044) // { encoding: 'pcm16', sampleRateHz: 48000, dataOffset: 44, dataLengthBytes: 768000, frameCount: 192000, ... }
+ * @example parseWavHeader(first64k, 768044)
+ * // { encoding: 'pcm16', sampleRateHz: 48000, dataOffset: 44, dataLengthBytes: 768000,
+ * //   frameCount: 192000, ... }
  */
 export function parseWavHeader(head: Uint8Array, fileLengthBytes: number): WavHeader {
   const view = new DataView(head.buffer, head.byteOffset, head.byteLength);
@@ -42,7 +46,9 @@ export function parseWavHeader(head: Uint8Array, fileLengthBytes: number): WavHe
   };
   const need = (offset: number, length: number, what: string): void => {
     if (offset + length > fileLengthBytes) fail(offset, `file ends before ${what} (truncated)`);
-    if (offset + length > head.length) fail(offset, `${what} lies beyond the ${head.length} header bytes read`);
+    if (offset + length > head.length) {
+      fail(offset, `${what} lies beyond the ${head.length} header bytes read`);
+    }
   };
   const tag = (offset: number) => String.fromCharCode(...head.subarray(offset, offset + 4));
 
@@ -51,17 +57,19 @@ export function parseWavHeader(head: Uint8Array, fileLengthBytes: number): WavHe
   if (tag(8) !== 'WAVE') fail(8, `RIFF form type is "${printable(tag(8))}", not "WAVE"`);
   const riffEnd = 8 + view.getUint32(4, true);
   if (riffEnd > fileLengthBytes) {
-    fail(4, `RIFF size says ${riffEnd} bytes but the file has ${fileLengthBytes} (header lies or file truncated)`);
+    const detail = `RIFF size says ${riffEnd} bytes but the file has ${fileLengthBytes}`;
+    fail(4, `${detail} (header lies or file truncated)`);
   }
 
-  let format: { encoding: WavHeader['encoding']; sampleRateHz: number; blockAlign: number } | undefined;
+  let format: WavFormat | undefined;
   for (let at = 12; ; ) {
     need(at, 8, 'the next chunk header (no "data" chunk found)');
     const id = tag(at);
     const size = view.getUint32(at + 4, true);
     const body = at + 8;
     if (body + size > riffEnd) {
-      fail(at + 4, `chunk "${printable(id)}" claims ${size} bytes, past the end of the RIFF data at ${riffEnd}`);
+      const detail = `chunk "${printable(id)}" claims ${size} bytes`;
+      fail(at + 4, `${detail}, past the end of the RIFF data at ${riffEnd}`);
     }
     if (id === 'fmt ') {
       if (format !== undefined) fail(at, 'a second "fmt " chunk');
@@ -87,12 +95,18 @@ export function parseWavHeader(head: Uint8Array, fileLengthBytes: number): WavHe
   }
 }
 
+interface WavFormat {
+  encoding: WavHeader['encoding'];
+  sampleRateHz: number;
+  blockAlign: number;
+}
+
 function readFormat(
   view: DataView,
   body: number,
   size: number,
   fail: (byteOffset: number, detail: string) => never,
-): { encoding: WavHeader['encoding']; sampleRateHz: number; blockAlign: number } {
+): WavFormat {
   if (size < 16) fail(body - 4, `"fmt " chunk is ${size} bytes; at least 16 are needed`);
   let code = view.getUint16(body, true);
   let codeOffset = body;
@@ -102,7 +116,9 @@ function readFormat(
   const blockAlign = view.getUint16(body + 12, true);
   const bits = view.getUint16(body + 14, true);
   if (code === FORMAT_EXTENSIBLE) {
-    if (size < 40) fail(body - 4, `WAVE_FORMAT_EXTENSIBLE "fmt " chunk is ${size} bytes; 40 are needed`);
+    if (size < 40) {
+      fail(body - 4, `WAVE_FORMAT_EXTENSIBLE "fmt " chunk is ${size} bytes; 40 are needed`);
+    }
     code = view.getUint16(body + 24, true);
     codeOffset = body + 24;
     const tailOk = GUID_TAIL.every((byte, k) => view.getUint8(body + 26 + k) === byte);
@@ -118,7 +134,8 @@ function readFormat(
   }
   if (sampleRateHz === 0) fail(body + 4, 'sample rate is 0');
   if (blockAlign !== (channels * bits) / 8) {
-    fail(body + 12, `block align ${blockAlign} disagrees with ${channels} channels of ${bits} bits`);
+    const detail = `block align ${blockAlign} disagrees with ${channels} channels of ${bits} bits`;
+    fail(body + 12, detail);
   }
   if (byteRate !== sampleRateHz * blockAlign) {
     fail(body + 8, `byte rate ${byteRate} disagrees with ${sampleRateHz} Hz x ${blockAlign} bytes`);

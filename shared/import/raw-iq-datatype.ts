@@ -13,7 +13,8 @@ const RAW_ALIASES: Record<string, string> = { cf32: 'cf32_le', ci16: 'ci16_le' }
  * @param sampleRateHz the rate the user states, finite and > 0.
  * @throws RangeError starting with "rawIqDatatype" for an unknown format or a bad rate (these are
  *   options, not file contents).
- * @example rawIqDatatype('ci16', 192000) // { datatype: { name: 'ci16_le', bytesPerSample: 4, ... }, sampleRateHz: 192000 }
+ * @example rawIqDatatype('ci16', 192000)
+ * // { datatype: { name: 'ci16_le', bytesPerSample: 4, ... }, sampleRateHz: 192000 }
  */
 export function rawIqDatatype(
   format: string,
@@ -21,10 +22,12 @@ export function rawIqDatatype(
 ): { datatype: SigmfDatatype; sampleRateHz: number } {
   const datatype = sigmfDatatypeFromName(RAW_ALIASES[format] ?? format);
   if (datatype === undefined) {
-    throw new RangeError(`rawIqDatatype: unknown I/Q format "${format}" (use cf32, ci16 or a SigMF complex type)`);
+    const hint = 'use cf32, ci16 or a SigMF complex type';
+    throw new RangeError(`rawIqDatatype: unknown I/Q format "${format}" (${hint})`);
   }
   if (!Number.isFinite(sampleRateHz) || sampleRateHz <= 0) {
-    throw new RangeError(`rawIqDatatype: sample rate must be a finite number of hertz > 0, got ${sampleRateHz}`);
+    const detail = `sample rate must be a finite number of hertz > 0, got ${sampleRateHz}`;
+    throw new RangeError(`rawIqDatatype: ${detail}`);
   }
   return { datatype, sampleRateHz };
 }

@@ -19,7 +19,14 @@ export interface SigmfDatatype {
 }
 
 const COMPONENT_BYTES: Record<SampleComponentType, 1 | 2 | 4 | 8> = {
-  f32: 4, f64: 8, i32: 4, i16: 2, i8: 1, u32: 4, u16: 2, u8: 1,
+  f32: 4,
+  f64: 8,
+  i32: 4,
+  i16: 2,
+  i8: 1,
+  u32: 4,
+  u16: 2,
+  u8: 1,
 };
 
 // SigMF core:datatype grammar (SigMF specification v1.x, "Dataset Format"): complex/real, then
@@ -39,7 +46,8 @@ const DATATYPE_PATTERN = /^(c|r)(f32|f64|i32|i16|i8|u32|u16|u8)(?:_(le|be))?$/;
  *
  * @param name the datatype string, e.g. `ci16_le`; case-sensitive as in the specification.
  * @returns the description, or undefined.
- * @example sigmfDatatypeFromName('cu8') // { name: 'cu8', bytesPerSample: 2, offset: 127.5, scale: 1/127.5, ... }
+ * @example sigmfDatatypeFromName('cu8')
+ * // { name: 'cu8', bytesPerSample: 2, offset: 127.5, scale: 1 / 127.5, ... }
  */
 export function sigmfDatatypeFromName(name: string): SigmfDatatype | undefined {
   const match = DATATYPE_PATTERN.exec(name);

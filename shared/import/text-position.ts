@@ -29,7 +29,8 @@ export function lineColumnAt(text: string, offset: number): TextPosition {
  * can point at the line a person has to edit. `from` starts the search at a character offset;
  * `occurrence` (0-based) skips earlier matches. Returns undefined if the key does not appear.
  *
- * @example jsonKeyPosition('{\n  "core:sample_rate": -1\n}', 'core:sample_rate') // { line: 2, column: 3, offset: 4 }
+ * @example jsonKeyPosition('{\n  "core:sample_rate": -1\n}', 'core:sample_rate')
+ * // { line: 2, column: 3, offset: 4 }
  */
 export function jsonKeyPosition(
   text: string,

@@ -15,7 +15,8 @@ export type TraceColumn =
  * frequency columns by name. A column named like a frequency or level without a known unit comes
  * back as `unitless` so the caller can refuse it rather than guess; anything else is `other`.
  *
- * @example classifyTraceColumn('Frequency (MHz)') // { role: 'frequency', unit: 'mhz', hzPerUnit: 1e6 }
+ * @example classifyTraceColumn('Frequency (MHz)')
+ * // { role: 'frequency', unit: 'mhz', hzPerUnit: 1e6 }
  * @example classifyTraceColumn('level_dbm')       // { role: 'level', unit: 'dbm' }
  * @example classifyTraceColumn('index')           // { role: 'other' }
  */

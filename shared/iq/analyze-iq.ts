@@ -1,6 +1,5 @@
 import { isPowerOfTwo } from '../dsp/fft';
-import { createWelchAccumulator, welchPsd, type WelchResult } from '../dsp/welch';
-import { CompensatedSum } from '../units/compensated-sum';
+import { createNamedWelchAccumulator, welchPsd, type WelchResult } from '../dsp/welch';
 import { requireFinite, requirePositive } from '../units/number-guards';
 import { defaultSegmentLength } from './default-segment-length';
 import { measureIqSpectrum } from './measure-iq-spectrum';
@@ -66,7 +65,11 @@ export function createIqAnalyzer(options: IqAnalysisOptions): {
   push(i: Float32Array, q: Float32Array): void;
   finish(): IqAnalysis;
 } {
-  return buildAnalyzer(options, { create: 'createIqAnalyzer', push: 'IqAnalyzer.push', finish: 'IqAnalyzer.finish' });
+  return buildAnalyzer(options, {
+    create: 'createIqAnalyzer',
+    push: 'IqAnalyzer.push',
+    finish: 'IqAnalyzer.finish',
+  });
 }
 
 /**
@@ -74,8 +77,13 @@ export function createIqAnalyzer(options: IqAnalysisOptions): {
  * Bad input as there, with messages starting with "analyzeIq".
  * @example analyzeIq(i, q, { sampleRateHz: 48000 }).pepDbfs; // e.g. -6.02
  */
-export function analyzeIq(i: Float32Array, q: Float32Array, options: IqAnalysisOptions): IqAnalysis {
-  const analyzer = buildAnalyzer(options, { create: 'analyzeIq', push: 'analyzeIq', finish: 'analyzeIq' });
+export function analyzeIq(
+  i: Float32Array,
+  q: Float32Array,
+  options: IqAnalysisOptions,
+): IqAnalysis {
+  const name = 'analyzeIq';
+  const analyzer = buildAnalyzer(options, { create: name, push: name, finish: name });
   analyzer.push(i, q);
   return analyzer.finish();
 }
@@ -90,50 +98,59 @@ function buildAnalyzer(
   if (sideband !== 'usb' && sideband !== 'lsb' && sideband !== 'auto') {
     throw new RangeError(`${fn}: sideband must be 'usb', 'lsb' or 'auto', got ${String(sideband)}`);
   }
-  const fullScaleDbm = options.fullScaleDbm === undefined ? null : requireFinite(fn, 'fullScaleDbm', options.fullScaleDbm);
+  const fullScaleDbm =
+    options.fullScaleDbm === undefined
+      ? null
+      : requireFinite(fn, 'fullScaleDbm', options.fullScaleDbm);
   const n = options.segmentLength ?? defaultSegmentLength(fs);
   if (!isPowerOfTwo(n) || n < MIN_IQ_SAMPLES) {
-    throw new RangeError(`${fn}: segmentLength must be a power of two ≥ ${MIN_IQ_SAMPLES}, got ${n}`);
+    throw new RangeError(
+      `${fn}: segmentLength must be a power of two ≥ ${MIN_IQ_SAMPLES}, got ${n}`,
+    );
   }
-  const welch = createWelchAccumulator({ sampleRateHz: fs, segmentLength: n });
+  const welch = createNamedWelchAccumulator(
+    { sampleRateHz: fs, segmentLength: n },
+    { create: fn, push: names.push, result: names.finish },
+  );
   const headI = new Float32Array(n); // the first segment, for a capture shorter than one
   const headQ = new Float32Array(n);
-  const energy = new CompensatedSum();
   let count = 0;
-  let peak = 0;
   let finished: IqAnalysis | null = null;
+  let failed = false;
 
   function push(i: Float32Array, q: Float32Array): void {
     if (finished !== null) throw new RangeError(`${names.push}: the analysis is already finished`);
+    if (failed) throw new RangeError(`${names.push}: an earlier push was rejected; start again`);
     if (i.length !== q.length) {
       throw new RangeError(`${names.push}: i and q lengths differ (${i.length} vs ${q.length})`);
-    }
-    let chunkEnergy = 0;
-    let chunkPeak = 0;
-    for (let k = 0; k < i.length; k++) {
-      const p = i[k] * i[k] + q[k] * q[k];
-      if (!Number.isFinite(p)) throw new RangeError(`${names.push}: sample ${count + k} is not finite`);
-      chunkEnergy += p;
-      if (p > chunkPeak) chunkPeak = p;
     }
     if (count < n) {
       const take = Math.min(n - count, i.length);
       headI.set(i.subarray(0, take), count);
       headQ.set(q.subarray(0, take), count);
     }
-    welch.push(i, q);
-    // Per-chunk partial sums, then a compensated total: cheap and accurate for long captures.
-    energy.add(chunkEnergy);
-    peak = Math.max(peak, chunkPeak);
+    try {
+      // The Welch copy loop also checks the samples, sums |x|² and finds its peak: one pass.
+      welch.push(i, q);
+    } catch (error) {
+      failed = true; // part of the chunk may be in the sums: no result may come from them
+      throw error;
+    }
     count += i.length;
   }
 
   function finish(): IqAnalysis {
     if (finished !== null) return finished;
+    if (failed) throw new RangeError(`${names.finish}: an earlier push was rejected; start again`);
     if (count < MIN_IQ_SAMPLES) {
-      throw new RangeError(`${names.finish}: at least ${MIN_IQ_SAMPLES} samples are needed, got ${count}`);
+      throw new RangeError(
+        `${names.finish}: at least ${MIN_IQ_SAMPLES} samples are needed, got ${count}`,
+      );
     }
-    if (!(peak > 0)) throw new RangeError(`${names.finish}: the capture holds no signal (all samples are zero)`);
+    const peak = welch.peakPower;
+    if (!(peak > 0)) {
+      throw new RangeError(`${names.finish}: the capture holds no signal (all samples are zero)`);
+    }
     const spectrum: WelchResult =
       welch.segmentsAveraged > 0
         ? welch.result()
@@ -144,7 +161,7 @@ function buildAnalyzer(
     const r = measureIqSpectrum(spectrum, sideband);
     const db = (p: number): number => 10 * Math.log10(p);
     const pepDbfs = db(peak);
-    const meanPowerDbfs = db(energy.value / count);
+    const meanPowerDbfs = db(welch.meanPower);
     const psdDbfsPerHz = spectrum.psd.map(db);
     finished = {
       sampleRateHz: fs,
@@ -155,7 +172,8 @@ function buildAnalyzer(
       pepDbm: fullScaleDbm === null ? null : fullScaleDbm + pepDbfs,
       meanPowerDbm: fullScaleDbm === null ? null : fullScaleDbm + meanPowerDbfs,
       carrierSuppressionDb: pepDbfs - db(r.carrierPowerLinear),
-      unwantedSidebandSuppressionDb: r.wanted === null ? null : r.wanted.tone.levelDb - db(r.wanted.imagePowerLinear),
+      unwantedSidebandSuppressionDb:
+        r.wanted === null ? null : r.wanted.tone.levelDb - db(r.wanted.imagePowerLinear),
       imd3Db: r.imd3PowerLinear === null ? null : pepDbfs - db(r.imd3PowerLinear),
       imd5Db: r.imd5PowerLinear === null ? null : pepDbfs - db(r.imd5PowerLinear),
       occupiedBandwidthHz: r.occupiedBandwidthHz,

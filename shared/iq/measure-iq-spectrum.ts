@@ -8,10 +8,13 @@ import { intermodProductFrequencies } from '../measurements/intermod-product-fre
 export const LOBE_HALF_WIDTH_BINS = 3;
 /** A detected line must stand this far above the median PSD, dB (common practice). */
 export const TONE_THRESHOLD_DB = 10;
-/** The second tone counts as a two-tone test when within this many dB of the first (47 CFR 2.1049 asks for equal tones; the slack is common practice). */
+/**
+ * The second tone makes a two-tone test when within this many dB of the first (47 CFR 2.1049
+ * asks for equal tones; the slack is common practice).
+ */
 export const TWO_TONE_MATCH_DB = 6;
 
-/** Spectral readings of a capture, linear powers in full-scale² (see analyzeIq for the dB forms). */
+/** Spectral readings of a capture, linear powers in full-scale² (analyzeIq gives the dB forms). */
 export interface IqSpectralReadings {
   sideband: 'usb' | 'lsb';
   carrierPowerLinear: number;
@@ -34,16 +37,21 @@ export interface IqSpectralReadings {
  * Source: single-tone image method, two-tone IMD method, RR 1.153 occupied bandwidth (see the
  * measurement functions); internal to analyzeIq, which validates its input.
  */
-export function measureIqSpectrum(spectrum: PowerSpectrum, sidebandOption: 'usb' | 'lsb' | 'auto'): IqSpectralReadings {
+export function measureIqSpectrum(
+  spectrum: PowerSpectrum,
+  sidebandOption: 'usb' | 'lsb' | 'auto',
+): IqSpectralReadings {
   const bw = spectrum.binWidthHz;
   const h = LOBE_HALF_WIDTH_BINS;
   const clearHz = (2 * h + 1) * bw; // a line this far from another has a separate lobe
-  const sideband = sidebandOption === 'auto' ? louderHalf(spectrum, (h + 0.5) * bw) : sidebandOption;
+  const sideband =
+    sidebandOption === 'auto' ? louderHalf(spectrum, (h + 0.5) * bw) : sidebandOption;
   const sign = sideband === 'usb' ? 1 : -1;
   const tones = detectTones(spectrum, { thresholdDb: TONE_THRESHOLD_DB, halfWidthBins: h });
   const wantedTones = tones.filter((t) => sign * t.frequencyHz >= clearHz); // strongest first
   const carrierPowerLinear = tonePowerAt(spectrum, 0, h);
-  const occupied = occupiedBandwidthFromPowers(spectrum.frequencyHz, spectrum.psd.map((p) => p * bw));
+  const binPowers = spectrum.psd.map((p) => p * bw);
+  const occupied = occupiedBandwidthFromPowers(spectrum.frequencyHz, binPowers);
 
   let wanted: IqSpectralReadings['wanted'] = null;
   if (wantedTones.length > 0) {
@@ -52,7 +60,9 @@ export function measureIqSpectrum(spectrum: PowerSpectrum, sidebandOption: 'usb'
   }
   let imd3PowerLinear: number | null = null;
   let imd5PowerLinear: number | null = null;
-  if (wantedTones.length >= 2 && wantedTones[0].levelDb - wantedTones[1].levelDb <= TWO_TONE_MATCH_DB) {
+  const twoTone =
+    wantedTones.length >= 2 && wantedTones[0].levelDb - wantedTones[1].levelDb <= TWO_TONE_MATCH_DB;
+  if (twoTone) {
     const a = sign * wantedTones[0].frequencyHz;
     const b = sign * wantedTones[1].frequencyHz;
     const occupiedLines = [0, a, b, -a, -b].map((f) => sign * f);
@@ -62,7 +72,8 @@ export function measureIqSpectrum(spectrum: PowerSpectrum, sidebandOption: 'usb'
         .map((audioHz) => sign * audioHz)
         .filter((f) => Math.abs(f) < spectrum.frequencyHz[spectrum.psd.length - 1] - h * bw)
         .filter((f) => occupiedLines.every((line) => Math.abs(f - line) >= clearHz));
-      return readable.length === 0 ? null : Math.max(...readable.map((f) => tonePowerAt(spectrum, f, h)));
+      if (readable.length === 0) return null;
+      return Math.max(...readable.map((f) => tonePowerAt(spectrum, f, h)));
     };
     imd3PowerLinear = productPower(3);
     imd5PowerLinear = productPower(5);

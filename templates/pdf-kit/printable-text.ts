@@ -41,7 +41,6 @@ export const GLYPH_FALLBACKS: Readonly<Record<string, string>> = {
   '\u2713': 'OK',
   '\u2714': 'OK',
   '\u2717': 'X',
-  '\u00ad': '',
 };
 
 /** True when the embedded subset has a glyph for the code point (newline counts as layout). */

@@ -3,6 +3,7 @@
  * against a stepped mask, and a two-tone intermodulation spectrum. The shapes are plausible, the
  * numbers are made up; nothing here is a measurement.
  */
+import { formatNumber } from '../pdf-kit/format-number';
 import type { PlotSpec } from './report-document';
 
 /** Park-Miller minimal standard generator (Park and Miller, CACM 31(10), 1988), in [0, 1). */
@@ -59,7 +60,7 @@ export function buildSampleMaskPlot(points: number, pepW: number, seed: number):
       { name: 'Measured spectrum (RMS, 300 Hz RBW)', x, y, role: 'trace' },
       { name: '47 CFR 80.211 mask (AB 3.0 kHz)', x: limitX, y: limitY, role: 'limit' },
     ],
-    marker: { x: worst.x, y: worst.y, label: `Least margin ${worst.marginDb.toFixed(1)} dB at ${Math.round(worst.x)} Hz` },
+    marker: { x: worst.x, y: worst.y, label: `Least margin ${formatNumber(worst.marginDb, 1)} dB at ${formatNumber(worst.x, 0)} Hz` },
     leastMarginDb: worst.marginDb,
     levelAtLeastMarginDb: worst.y,
   };

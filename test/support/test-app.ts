@@ -45,7 +45,7 @@ export async function startTestApp(options: { accessTtlSeconds?: number } = {}):
       sequelize,
       publicUrl: 'http://127.0.0.1:4610',
       keyEncryptionSecret: 'test-only-key-encryption-secret',
-      enqueueMail: (transaction, mail) => enqueueMail(boss, sequelize, transaction, mail),
+      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
     },
   });
   return {

@@ -16,8 +16,9 @@ import { Report } from './report';
 import { ReportStatusChange } from './report-status-change';
 import { AuditEntry } from './audit-entry';
 import { SigningIdentity } from './signing-identity';
+import { RunInstrument } from './run-instrument';
 
-export { Organization, User, Membership, RefreshToken, Client, Device, Instrument, RuleSet, TestPlan, TestCase, TestRun, Reading, Result, Report, ReportStatusChange, AuditEntry, SigningIdentity };
+export { Organization, User, Membership, RefreshToken, Client, Device, Instrument, RuleSet, TestPlan, TestCase, TestRun, Reading, Result, Report, ReportStatusChange, AuditEntry, SigningIdentity, RunInstrument };
 
 /** Initialise every model on one Sequelize instance (call once at start-up). */
 export function initModels(sequelize: Sequelize): void {
@@ -38,4 +39,5 @@ export function initModels(sequelize: Sequelize): void {
   ReportStatusChange.initModel(sequelize);
   AuditEntry.initModel(sequelize);
   SigningIdentity.initModel(sequelize);
+  RunInstrument.initModel(sequelize);
 }

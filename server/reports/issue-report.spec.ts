@@ -1,0 +1,93 @@
+import { execFileSync } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import request from 'supertest';
+import { startTestApp, type TestApp } from '../../test/support/test-app';
+import { buildLabScenario, signIn } from '../../test/support/factories';
+import { inTenant } from '../tenancy/tenant-transaction';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(() => t?.close());
+
+async function approvedRun() {
+  const s = await buildLabScenario(t.sequelize);
+  const as = async (user: { email: string }, org = s.lab.id) => {
+    const { token } = await signIn(t.app, user.email);
+    return (method: 'get' | 'post' | 'put', p: string, body?: object) => request(t.app)[method](`/api${p}`).set('Authorization', `Bearer ${token}`).set('X-Organization-Id', org).send(body);
+  };
+  const engineer = await as(s.engineer);
+  const reviewer = await as(s.reviewer);
+  const run = (await engineer('post', '/runs', { planId: s.plan.id })).body;
+  await engineer('put', `/runs/${run.id}/cases/${run.testCases[0].id}/reading`, { values: { pepDbm: 51, carrierDbm: 8.2 } });
+  await engineer('post', `/runs/${run.id}/submit`);
+  await reviewer('post', `/runs/${run.id}/approve`);
+  return { s, engineer, reviewer, run, as };
+}
+
+describe('issuing a report', () => {
+  it('issues a signed PDF in the same transaction as the state change, visible to the client manufacturer', async () => {
+    const { s, reviewer, run, as } = await approvedRun();
+    const issued = await reviewer('post', `/runs/${run.id}/issue`);
+    if (issued.status !== 201) console.error(JSON.stringify(t.logs.slice(-1)));
+    expect(issued.status).toBe(201);
+    expect(issued.body.reportNumber).toMatch(/^T[0-9A-F]{6}-\d{4}-0001$/);
+    expect(issued.body.sha256).toMatch(/^[0-9a-f]{64}$/);
+    const detail = await reviewer('get', `/runs/${run.id}`);
+    expect(detail.body.state).toBe('issued');
+
+    const pdf = await reviewer('get', `/reports/${issued.body.id}/pdf`).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(pdf.status).toBe(200);
+    const bytes = pdf.body as Buffer;
+    const file = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'sidecheck-report-')), 'report.pdf');
+    fs.writeFileSync(file, bytes);
+    // pdftotext (poppler): the device, the test, the value and the verdict are in the text.
+    const text = execFileSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8' });
+    expect(text).toContain(s.device.serialNumber);
+    expect(text).toContain('TX-1 test radio');
+    expect(text).toMatch(/Carrier suppression/);
+    expect(text).toMatch(/42\.8/);
+    expect(text).toMatch(/Pass/);
+    // pdfsig reads the embedded PKCS#7 signature (it exits 0 either way: read its text).
+    const sig = execFileSync('pdfsig', [file], { encoding: 'utf8' });
+    expect(sig).toContain('Signature is Valid.');
+    expect(sig).toContain('Total document signed');
+
+    // The manufacturer client sees it, with the same bytes.
+    const maker = await as(s.makerAdmin, s.maker.id);
+    const list = await maker('get', '/reports');
+    expect(list.body.items.map((r: { id: string }) => r.id)).toContain(issued.body.id);
+
+    // The public verification answer, without sign-in.
+    const verify = await request(t.app).get(`/api${issued.body.verifyPath}`);
+    expect(verify.status).toBe(200);
+    expect(verify.body).toMatchObject({ reportNumber: issued.body.reportNumber, status: 'current', sha256: issued.body.sha256 });
+
+    // The client's e-mail was enqueued in the same transaction.
+    const [jobs] = await t.sequelize.query(`SELECT data FROM pgboss.job WHERE name = 'mail' AND data->>'subject' LIKE :subject`, { replacements: { subject: `%${issued.body.reportNumber}%` } });
+    expect(jobs).toHaveLength(1);
+  });
+
+  it('keeps issued reports immutable in the database: a plain SQL UPDATE is refused by the trigger', async () => {
+    const { s, reviewer, run } = await approvedRun();
+    const issued = await reviewer('post', `/runs/${run.id}/issue`);
+    await expect(
+      inTenant(t.sequelize, s.lab.id, () => t.sequelize.query(`UPDATE reports SET sha256 = 'x' WHERE id = :id`, { replacements: { id: issued.body.id } })),
+    ).rejects.toThrow(/immutable/);
+    await expect(inTenant(t.sequelize, s.lab.id, () => t.sequelize.query(`DELETE FROM reports WHERE id = :id`, { replacements: { id: issued.body.id } }))).rejects.toThrow(/immutable/);
+  });
+
+  it('refuses to issue a run that is not authorized, and issues only once', async () => {
+    const { reviewer, run } = await approvedRun();
+    expect((await reviewer('post', `/runs/${run.id}/issue`)).status).toBe(201);
+    const again = await reviewer('post', `/runs/${run.id}/issue`);
+    expect(again.status).toBe(409);
+  });
+});
