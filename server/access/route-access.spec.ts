@@ -49,6 +49,8 @@ const EXPECTED: Record<string, Expect> = {
   'post /runs/:id/return': ['lab-admin', 'reviewer'],
   'post /runs/:id/approve': ['lab-admin', 'reviewer'],
   'post /runs/:id/issue': ['lab-admin', 'reviewer'],
+  'post /reports/:id/withdraw': ['lab-admin', 'reviewer'],
+  'post /runs/:id/revise': ['lab-admin', 'reviewer'],
   'get /reports': EVERY_MEMBER,
   'get /reports/:id': EVERY_MEMBER,
   'get /reports/:id/pdf': EVERY_MEMBER,

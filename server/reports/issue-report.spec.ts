@@ -91,3 +91,44 @@ describe('issuing a report', () => {
     expect(again.status).toBe(409);
   });
 });
+
+describe('withdrawal and correction (ISO/IEC 17025:2017 7.8.8)', () => {
+  it('withdraws with a reason, keeps the record, and the verify page says so', async () => {
+    const { reviewer, run } = await approvedRun();
+    const issued = (await reviewer('post', `/runs/${run.id}/issue`)).body;
+    expect((await reviewer('post', `/reports/${issued.id}/withdraw`, {})).status).toBe(422);
+    const res = await reviewer('post', `/reports/${issued.id}/withdraw`, { reason: 'Wrong serial number recorded' });
+    expect(res.status).toBe(200);
+    expect(res.body.status).toBe('withdrawn');
+    const verify = await request(t.app).get(`/api${issued.verifyPath}`);
+    expect(verify.body).toMatchObject({ status: 'withdrawn', reason: 'Wrong serial number recorded' });
+    expect((await reviewer('post', `/reports/${issued.id}/withdraw`, { reason: 'again' })).status).toBe(409);
+    expect((await reviewer('get', `/runs/${run.id}`)).body.state).toBe('withdrawn');
+  });
+
+  it('a correction issues revision 2 with the same number, stating what it replaces and why; revision 1 reads superseded', async () => {
+    const { engineer, reviewer, run } = await approvedRun();
+    const first = (await reviewer('post', `/runs/${run.id}/issue`)).body;
+    const reopened = await reviewer('post', `/runs/${run.id}/revise`, { reason: 'Carrier re-measured with 10 Hz RBW' });
+    expect(reopened.body.state).toBe('testing');
+    await engineer('put', `/runs/${run.id}/cases/${run.testCases[0].id}/reading`, { values: { pepDbm: 51, carrierDbm: 7.9 } });
+    await engineer('post', `/runs/${run.id}/submit`);
+    await reviewer('post', `/runs/${run.id}/approve`);
+    const second = await reviewer('post', `/runs/${run.id}/issue`);
+    expect(second.status).toBe(201);
+    expect(second.body.reportNumber).toBe(first.reportNumber);
+    expect(second.body.revision).toBe(2);
+    const old = await request(t.app).get(`/api${first.verifyPath}`);
+    expect(old.body).toMatchObject({ status: 'superseded', reason: 'Carrier re-measured with 10 Hz RBW', supersededBy: { reportNumber: first.reportNumber, revision: 2 } });
+    const pdf = await reviewer('get', `/reports/${second.body.id}/pdf`).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    const file = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'sidecheck-rev-')), 'r.pdf');
+    fs.writeFileSync(file, pdf.body as Buffer);
+    const text = execFileSync('pdftotext', [file, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+    expect(text).toContain('Carrier re-measured with 10 Hz RBW');
+    expect(text).toContain(`${first.reportNumber} revision 1`);
+  });
+});

@@ -5,7 +5,7 @@
  */
 import crypto from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
-import { Organization, Report, ReportStatusChange, TestRun, User } from '../db/models';
+import { AuditEntry, Organization, Report, ReportStatusChange, TestRun, User } from '../db/models';
 import type { RouteContext } from '../http/route';
 import { conflict, notFound } from '../http/problem';
 import { audit } from '../audit/audit';
@@ -34,12 +34,24 @@ export function summarizeVerdicts(verdicts: Verdict[]): string {
 export async function issueReport(deps: ReportDeps, ctx: RouteContext, run: TestRun) {
   if (run.state !== 'approved') throw conflict(`Only an authorized run can be issued; this one is ${run.state}.`, { code: 'illegal-transition' });
   const lab = (await Organization.findByPk(run.organizationId))!;
-  const n = await nextCounter(deps.sequelize, run.organizationId, `report-${new Date().getUTCFullYear()}`, ctx.transaction);
-  const reportNumber = `${lab.code}-${new Date().getUTCFullYear()}-${String(n).padStart(4, '0')}`;
+  // A run issued before and reopened for correction gets the same number, next revision (7.8.8).
+  const previous = await Report.findOne({ where: { runId: run.id }, order: [['revision', 'DESC']], attributes: { exclude: ['pdf'] } });
+  let reportNumber: string;
+  if (previous) {
+    reportNumber = previous.reportNumber;
+  } else {
+    const n = await nextCounter(deps.sequelize, run.organizationId, `report-${new Date().getUTCFullYear()}`, ctx.transaction);
+    reportNumber = `${lab.code}-${new Date().getUTCFullYear()}-${String(n).padStart(4, '0')}`;
+  }
+  const revision = previous ? previous.revision + 1 : 1;
+  // The reason given when the run was reopened, from the append-only audit log.
+  const reopened = previous ? await AuditEntry.findOne({ where: { entity: 'test-run', entityId: run.id, action: 'run-revise' }, order: [['id', 'DESC']] }) : null;
+  const reason = (reopened?.after as { reason?: string } | null)?.reason ?? 'Corrected';
+  const replaces = previous ? { reportNumber: `${previous.reportNumber} revision ${previous.revision}`, reason } : undefined;
   const verifyToken = crypto.randomBytes(18).toString('base64url');
   const issuedAt = new Date();
   const authorizer = (await User.findByPk(run.reviewerId ?? ctx.principal!.userId))!;
-  const built = await buildReportDocument({ run, reportNumber, revision: 1, issuedAt, authorizedBy: authorizer, verificationUrl: `${deps.publicUrl}/verify/${verifyToken}` });
+  const built = await buildReportDocument({ run, reportNumber, revision, replaces, issuedAt, authorizedBy: authorizer, verificationUrl: `${deps.publicUrl}/verify/${verifyToken}` });
   const identity = await activeSigningIdentity(run.organizationId, deps.keyEncryptionSecret);
   const signed = await renderSignedReport(built.doc, identity);
   const report = await Report.create({
@@ -47,7 +59,9 @@ export async function issueReport(deps: ReportDeps, ctx: RouteContext, run: Test
     runId: run.id,
     clientOrganizationId: built.clientOrganizationId,
     reportNumber,
-    revision: 1,
+    revision,
+    replacesReportId: previous?.id ?? null,
+    replacesReason: replaces?.reason ?? null,
     verifyToken,
     sha256: signed.sha256,
     pdf: signed.pdf,
@@ -65,8 +79,11 @@ export async function issueReport(deps: ReportDeps, ctx: RouteContext, run: Test
     issuedBy: ctx.principal!.userId,
     issuedAt,
   });
+  if (previous) {
+    await ReportStatusChange.create({ organizationId: run.organizationId, reportId: previous.id, status: 'superseded', reason: replaces!.reason, supersededById: report.id, changedBy: ctx.principal!.userId });
+  }
   const before = presentRun(run);
-  await run.update({ state: 'issued' });
+  await run.update({ state: 'issued', returnReason: null });
   await audit(ctx, { action: 'run-issue', entity: 'test-run', entityId: run.id, before, after: { ...presentRun(run), reportId: report.id, reportNumber, sha256: signed.sha256 } });
   const mail = reportIssuedEmail({
     contactName: built.contactName,
@@ -86,6 +103,20 @@ export async function issueReport(deps: ReportDeps, ctx: RouteContext, run: Test
       : undefined,
   });
   return presentReport(report, []);
+}
+
+/** Withdraw an issued report: the record stays, a status change says why (ISO/IEC 17025:2017 7.8.8). */
+export async function withdrawReport(ctx: RouteContext, reportId: string, reason: string) {
+  const report = await loadReport(reportId);
+  if (report.organizationId !== ctx.organizationId) throw notFound('The report');
+  const changes = await ReportStatusChange.findAll({ where: { reportId } });
+  if (reportStatus(changes).status !== 'current') throw conflict(`Report ${report.reportNumber} revision ${report.revision} is already ${reportStatus(changes).status}.`, { code: 'report-not-current' });
+  const change = await ReportStatusChange.create({ organizationId: report.organizationId, reportId, status: 'withdrawn', reason, changedBy: ctx.principal!.userId });
+  const run = (await TestRun.findByPk(report.runId))!;
+  const before = presentRun(run);
+  await run.update({ state: 'withdrawn' });
+  await audit(ctx, { action: 'report-withdraw', entity: 'report', entityId: reportId, before, after: { ...presentRun(run), reason } });
+  return presentReport(report, [...changes, change]);
 }
 
 export function reportStatus(changes: ReportStatusChange[]) {

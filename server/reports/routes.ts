@@ -4,7 +4,9 @@ import { notFound } from '../http/problem';
 import { page, readListQuery } from '../http/list-query';
 import { asSystem } from '../tenancy/tenant-transaction';
 import { loadRun } from '../runs/run-service';
-import { issueReport, listReports, loadReport, presentReport, reportStatus, type ReportDeps } from './report-service';
+import { issueReport, listReports, loadReport, presentReport, reportStatus, withdrawReport, type ReportDeps } from './report-service';
+import { reasonSchema } from '../../shared/schemas/records';
+import { runDetail, transition } from '../runs/run-service';
 
 const READERS = ['lab-admin', 'engineer', 'reviewer', 'billing', 'manufacturer-admin', 'manufacturer-viewer'] as const;
 
@@ -17,6 +19,28 @@ export function reportRoutes(deps: ReportDeps): RouteDef[] {
       access: { kind: 'member', roles: ['lab-admin', 'reviewer'] },
       async handler(ctx) {
         return issueReport(deps, ctx, await loadRun(ctx.params.id));
+      },
+    }),
+    route<{ reason: string }>({
+      method: 'post',
+      path: '/reports/:id/withdraw',
+      summary: 'Withdraw an issued report, with the reason (the record is kept)',
+      access: { kind: 'member', roles: ['lab-admin', 'reviewer'] },
+      bodySchema: reasonSchema,
+      async handler(ctx) {
+        ctx.status(200);
+        return withdrawReport(ctx, ctx.params.id, ctx.body.reason);
+      },
+    }),
+    route<{ reason: string }>({
+      method: 'post',
+      path: '/runs/:id/revise',
+      summary: 'Reopen an issued run for correction; re-issuing supersedes the report with a new revision',
+      access: { kind: 'member', roles: ['lab-admin', 'reviewer'] },
+      bodySchema: reasonSchema,
+      async handler(ctx) {
+        ctx.status(200);
+        return runDetail(await transition(ctx, await loadRun(ctx.params.id), 'revise', ctx.body.reason));
       },
     }),
     route({

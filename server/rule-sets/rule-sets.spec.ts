@@ -66,7 +66,7 @@ describe('rule sets', () => {
 
     const latest = (await engineer('get', `/rule-sets?latest=true&key=${v1.key}`)).body;
     expect(latest.items.map((r: RuleSetRow) => [r.version, r.id])).toEqual([[2, res.body.id]]);
-    const every = (await engineer('get', `/rule-sets?key=${v1.key}`)).body;
+    const every = (await engineer('get', `/rule-sets?key=${v1.key}&sort=-version`)).body;
     expect(every.items.map((r: RuleSetRow) => r.version)).toEqual([2, 1]);
 
     // Editing an old version is refused: the latest is where changes go.
@@ -102,16 +102,16 @@ describe('rule sets', () => {
 
   const maskOf = (vertices: unknown) => (body: RuleSetBody) => ({ body: { ...body, limits: { ...body.limits, emissionMask: { ...body.limits.emissionMask, vertices } } } });
   it.each([
-    ['a mask vertex above the reference', maskOf([[1500, 0], [1500, 2]]), '/body/limits/emissionMask/vertices/1/1'],
-    ['a negative offset', maskOf([[-1, 0], [1500, -28]]), '/body/limits/emissionMask/vertices/0/0'],
-    ['decreasing offsets', maskOf([[1500, 0], [4500, -28], [3000, -35]]), '/body/limits/emissionMask/vertices/2/0'],
-    ['an unknown decision rule', (body: RuleSetBody) => ({ body: { ...body, decisionRule: { kind: 'majority-vote' } } }), '/body/decisionRule'],
-    ['an audio band upside down', (body: RuleSetBody) => ({ body: { ...body, limits: { ...body.limits, audioResponse: { lowHz: 3000, highHz: 300, maxVariationDb: 6, source: 'x' } } } }), '/body/limits/audioResponse/highHz'],
-    ['a missing body', () => ({ name: 'x' }), '/body'],
-    ['an unknown field', (body: RuleSetBody) => ({ body, owner: 'me' }), '/owner'],
-    ['a name too long', (body: RuleSetBody) => ({ body, name: 'x'.repeat(201) }), '/name'],
-    ['a budget row with an unknown distribution', (body: RuleSetBody) => ({ body: { ...body, uncertainty: { ...body.uncertainty, relative: [{ name: 'x', distribution: 'lognormal', value: 1 }] } } }), '/body/uncertainty/relative/0/distribution'],
-  ])('refuses an edit with %s: 422 naming %s, nothing stored', async (_what, make, pointer) => {
+    ['a mask vertex above the reference', '/body/limits/emissionMask/vertices/1/1', maskOf([[1500, 0], [1500, 2]])],
+    ['a negative offset', '/body/limits/emissionMask/vertices/0/0', maskOf([[-1, 0], [1500, -28]])],
+    ['decreasing offsets', '/body/limits/emissionMask/vertices/2/0', maskOf([[1500, 0], [4500, -28], [3000, -35]])],
+    ['an unknown decision rule', '/body/decisionRule', (body: RuleSetBody) => ({ body: { ...body, decisionRule: { kind: 'majority-vote' } } })],
+    ['an audio band upside down', '/body/limits/audioResponse/highHz', (body: RuleSetBody) => ({ body: { ...body, limits: { ...body.limits, audioResponse: { lowHz: 3000, highHz: 300, maxVariationDb: 6, source: 'x' } } } })],
+    ['a missing body', '/body', () => ({ name: 'x' })],
+    ['an unknown field', '/owner', (body: RuleSetBody) => ({ body, owner: 'me' })],
+    ['a name too long', '/name', (body: RuleSetBody) => ({ body, name: 'x'.repeat(201) })],
+    ['a budget row with an unknown distribution', '/body/uncertainty/relative/0/distribution', (body: RuleSetBody) => ({ body: { ...body, uncertainty: { ...body.uncertainty, relative: [{ name: 'x', distribution: 'lognormal', value: 1 }] } } })],
+  ])('refuses an edit with %s: 422 naming %s, nothing stored', async (_what, pointer, make) => {
     const { s, engineer, copy } = await setup();
     const v1 = await copy();
     const res = await engineer('put', `/rule-sets/${v1.id}`, make(v1.body));
@@ -121,7 +121,12 @@ describe('rule sets', () => {
     expect(await versionsOf(s.lab.id, v1.key)).toBe(1);
   });
 
-  it.each([[{}], [{ name: '' }], [{ name: 'x'.repeat(201) }], [{ name: 'ok', key: 'mine' }]])('refuses copying with the body %j (422)', async (body) => {
+  it.each([
+    ['no name', {}],
+    ['an empty name', { name: '' }],
+    ['a name of 201 characters', { name: 'x'.repeat(201) }],
+    ['an unknown field', { name: 'ok', key: 'mine' }],
+  ])('refuses copying with %s (422)', async (_what, body) => {
     const { s, engineer, maritime } = await setup();
     expect((await engineer('post', `/rule-sets/${maritime.id}/copy`, body)).status).toBe(422);
     expect(await inTenant(t.sequelize, s.lab.id, () => RuleSet.count({ where: { organizationId: s.lab.id } }))).toBe(0);

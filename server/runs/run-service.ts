@@ -146,7 +146,7 @@ export async function transition(ctx: RouteContext, run: TestRun, action: RunAct
   }
   const changes: Partial<TestRun> = { state: to };
   if (action === 'approve') changes.reviewerId = me;
-  if (action === 'return') changes.returnReason = reason ?? null;
+  if (action === 'return' || action === 'revise') changes.returnReason = reason ?? null;
   if (action === 'submit') changes.returnReason = null;
   await run.update(changes);
   await audit(ctx, { action: `run-${action}`, entity: 'test-run', entityId: run.id, before, after: { ...presentRun(run), reason: reason ?? null } });

@@ -37,7 +37,7 @@ export function bandPower(spectrum: PowerSpectrum, fromHz: number, toHz: number)
  * its main lobe, i.e. the bins within ±halfWidthBins of the bin nearest frequencyHz, times the
  * bin width. Because the Welch PSD is normalized by Σw², this total does not depend on where the
  * tone falls within a bin (no scalloping loss), provided the lobe fits: Hann's main lobe is
- * ±2 bins, so the default ±3 keeps ≥ 99.9 % of the tone's power wherever it falls.
+ * ±2 bins, so the default ±3 keeps ≥ 99.99 % of the tone's power (−0.0003 dB at half a bin).
  *
  * Source: Parseval's relation for the windowed DFT (common practice: "integrate a few bins
  * around a tone"). Units: Hz in; power as {@link bandPower}.

@@ -1,4 +1,4 @@
-import { ComplexFft, complexFftOfSize, isPowerOfTwo } from './fft';
+import { CACHED_FFT_MAX_SIZE, ComplexFft, complexFftOfSize, isPowerOfTwo } from './fft';
 import { createMulberry32 } from './mulberry32';
 
 // Independent reference: the npm package fft-js (recursive Cooley–Tukey, Vail Systems), a
@@ -78,8 +78,10 @@ describe('ComplexFft', () => {
     back.forEach((v, k) => expect(v).toBeCloseTo(input[k], 13));
   });
 
-  it('reuses one instance (and its tables) per size', () => {
+  it('reuses one instance (and its tables) per size, up to the cache limit', () => {
     expect(complexFftOfSize(2048)).toBe(complexFftOfSize(2048));
+    const large = 2 * CACHED_FFT_MAX_SIZE;
+    expect(complexFftOfSize(large)).not.toBe(complexFftOfSize(large));
   });
 
   it('rejects sizes that are not powers of two, and bad buffers, naming the method', () => {

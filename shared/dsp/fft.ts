@@ -36,8 +36,7 @@ function copyPair(input: ComplexBuffer, output: ComplexBuffer): void {
 export class ComplexFft {
   readonly size: number;
   private readonly engine: FFT | null;
-  private readonly splitIn: number[];
-  private readonly splitOut: number[];
+  private split: { input: number[]; output: number[] } | null = null;
 
   constructor(size: number) {
     if (!isPowerOfTwo(size)) {
@@ -46,8 +45,6 @@ export class ComplexFft {
     this.size = size;
     // fft.js rejects size 1; the one-point DFT is the identity.
     this.engine = size > 1 ? new FFT(size) : null;
-    this.splitIn = this.createBuffer();
-    this.splitOut = this.createBuffer();
   }
 
   /** A zeroed interleaved buffer of length 2N, as a packed (hole-free) array of numbers. */
@@ -71,8 +68,8 @@ export class ComplexFft {
 
   /**
    * Forward transform of split data: (re, im) of length N into (outRe, outIm) of length N.
-   * Uses two internal interleaved buffers, so this instance must not be shared between
-   * concurrent callers (JavaScript is single-threaded, so only re-entrancy matters).
+   * Uses two internal interleaved buffers, made on first use (JavaScript is single-threaded,
+   * so sharing the instance is safe).
    */
   forwardSplit(
     re: ArrayLike<number>,
@@ -84,13 +81,14 @@ export class ComplexFft {
     if (re.length !== n || im.length !== n || outRe.length !== n || outIm.length !== n) {
       throw new RangeError(`ComplexFft.forwardSplit: every array must have length ${n}`);
     }
-    const a = this.splitIn;
+    this.split ??= { input: this.createBuffer(), output: this.createBuffer() };
+    const a = this.split.input;
+    const b = this.split.output;
     for (let k = 0; k < n; k++) {
       a[2 * k] = re[k];
       a[2 * k + 1] = im[k];
     }
-    this.forward(a, this.splitOut);
-    const b = this.splitOut;
+    this.forward(a, b);
     for (let k = 0; k < n; k++) {
       outRe[k] = b[2 * k];
       outIm[k] = b[2 * k + 1];
@@ -115,9 +113,14 @@ export function isPowerOfTwo(n: number): boolean {
 
 const cache = new Map<number, ComplexFft>();
 
+/** Sizes up to this are kept once built (Welch segment lengths); larger ones are not. */
+export const CACHED_FFT_MAX_SIZE = 2 ** 17;
+
 /**
  * The shared {@link ComplexFft} of a size, built on first use and kept, so the tables are
- * reused across calls (a 16384-point table is 256 kB; a process uses only a few sizes).
+ * reused across calls (a 16384-point table is 256 kB; a process uses only a few sizes). Sizes
+ * above {@link CACHED_FFT_MAX_SIZE} (one-off whole-record transforms, whose tables run to tens
+ * of megabytes) are built fresh each call and left to the garbage collector.
  * Bad input: as the ComplexFft constructor.
  * @example complexFftOfSize(1024) === complexFftOfSize(1024); // true
  */
@@ -125,7 +128,7 @@ export function complexFftOfSize(size: number): ComplexFft {
   let fft = cache.get(size);
   if (fft === undefined) {
     fft = new ComplexFft(size);
-    cache.set(size, fft);
+    if (size <= CACHED_FFT_MAX_SIZE) cache.set(size, fft);
   }
   return fft;
 }

@@ -1,6 +1,6 @@
 export { anyLengthDft } from './any-length-dft';
 export { bandPower, tonePowerAt } from './band-power';
-export { ComplexFft, complexFftOfSize, isPowerOfTwo } from './fft';
+export { CACHED_FFT_MAX_SIZE, ComplexFft, complexFftOfSize, isPowerOfTwo } from './fft';
 export type { ComplexBuffer } from './fft';
 export { createComplexNoise } from './gaussian-noise';
 export { analyticSignal, realToIq } from './hilbert';

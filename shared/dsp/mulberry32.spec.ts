@@ -17,13 +17,16 @@ describe('createMulberry32', () => {
     const cells = new Array<number>(10).fill(0);
     let sum = 0;
     let sumSq = 0;
+    let [min, max] = [Infinity, -Infinity];
     for (let k = 0; k < n; k++) {
       const u = next();
-      expect(u >= 0 && u < 1).toBe(true);
+      [min, max] = [Math.min(min, u), Math.max(max, u)];
       sum += u;
       sumSq += u * u;
       cells[Math.floor(u * 10)]++;
     }
+    expect(min).toBeGreaterThanOrEqual(0);
+    expect(max).toBeLessThan(1);
     const mean = sum / n;
     expect(mean).toBeCloseTo(0.5, 2);
     expect(sumSq / n - mean * mean).toBeCloseTo(1 / 12, 3);

@@ -146,14 +146,16 @@ describe('createSsbSignalStream', () => {
     const whole = synthesizeSsb(spec);
     const stream = createSsbSignalStream(spec, { chunkLength: 7777 });
     let pos = 0;
+    let largestDifference = 0;
     for (let c = stream.next(); c !== null; c = stream.next()) {
-      for (let k = 0; k < c.i.length; k += 13) {
-        expect(c.i[k]).toBeCloseTo(whole.i[pos + k], 6);
-        expect(c.q[k]).toBeCloseTo(whole.q[pos + k], 6);
+      for (let k = 0; k < c.i.length; k++) {
+        const d = Math.abs(c.i[k] - whole.i[pos + k]) + Math.abs(c.q[k] - whole.q[pos + k]);
+        largestDifference = Math.max(largestDifference, d);
       }
       pos += c.i.length;
     }
     expect(pos).toBe(spec.sampleCount);
+    expect(largestDifference).toBeLessThan(1e-6); // float32 rounding of a 1e-11 phasor drift
     expect(stream.truth().pepLinear).toBeCloseTo(whole.truth.pepLinear, 12);
   });
 

@@ -3,6 +3,7 @@ import { createMulberry32 } from '../dsp/mulberry32';
 import type { SsbSignalSpec, SsbTruth } from '../dsp/ssb-signal-spec';
 import { createSsbSignalStream, synthesizeSsb } from '../dsp/synthesizer';
 import { imageRejectionDb } from '../phasing/image-rejection';
+import { meanPowerFromEnvelope, pepFromEnvelope } from '../power/envelope-power';
 import { analyzeIq, createIqAnalyzer } from './analyze-iq';
 
 const db = (p: number): number => 10 * Math.log10(p);
@@ -46,6 +47,13 @@ describe('analyzeIq: synthesizer round trip', () => {
       { frequencyHz: expect.closeTo(1700, 0), levelDbfs: expect.closeTo(-10, 1) },
     ]);
     expect(result.sideband).toBe('usb');
+  });
+
+  it('PEP and mean agree with the power module (max |x|², mean |x|²): two independent paths', () => {
+    const s = synthesizeSsb({ ...twoTone, carrierLeakBelowPepDb: 35 });
+    const result = analyzeIq(s.i, s.q, { sampleRateHz: fs });
+    expect(result.pepDbfs).toBeCloseTo(db(pepFromEnvelope(s.i, s.q)), 12);
+    expect(result.meanPowerDbfs).toBeCloseTo(db(meanPowerFromEnvelope(s.i, s.q)), 12);
   });
 
   it('1° phase error alone → 41.18 dB unwanted-sideband suppression (common practice)', () => {

@@ -6,7 +6,7 @@
 export const RUN_STATES = ['draft', 'testing', 'in-review', 'approved', 'issued', 'withdrawn', 'superseded'] as const;
 export type RunState = (typeof RUN_STATES)[number];
 
-export type RunAction = 'start' | 'submit' | 'return' | 'approve' | 'issue' | 'withdraw' | 'supersede';
+export type RunAction = 'start' | 'submit' | 'return' | 'approve' | 'issue' | 'withdraw' | 'revise';
 
 /** Allowed transitions: action -> [from states, to state]. */
 export const RUN_TRANSITIONS: Record<RunAction, { from: readonly RunState[]; to: RunState }> = {
@@ -16,7 +16,8 @@ export const RUN_TRANSITIONS: Record<RunAction, { from: readonly RunState[]; to:
   approve: { from: ['in-review'], to: 'approved' },
   issue: { from: ['approved'], to: 'issued' },
   withdraw: { from: ['issued'], to: 'withdrawn' },
-  supersede: { from: ['issued'], to: 'superseded' },
+  /** Reopen an issued run for correction; re-issuing makes a new revision that supersedes the old report. */
+  revise: { from: ['issued'], to: 'testing' },
 };
 
 /** Our words for each state, as shown on screen and in lists. */

@@ -1,0 +1,97 @@
+/**
+ * The home page at volume: 100,000 runs in one lab, next to a neighbour lab of the same size.
+ * Checks the plans PostgreSQL chooses for the home queries (index scans that start from
+ * organization_id, no sequential scan of the big tables) and the answer time.
+ */
+import { QueryTypes } from 'sequelize';
+import { startTestApp, type TestApp } from '../../test/support/test-app';
+import { buildLabScenario } from '../../test/support/factories';
+import { asSystem, inTenant } from '../tenancy/tenant-transaction';
+import { callerFor } from '../instruments/lab-session.test-support';
+import { addDaysIso, todayIso } from '../instruments/calibration-status';
+import { AWAITING_REVIEW, CALIBRATION_DUE, RECENT_ACTIVITY, RUNS_BY_STATE } from './home-queries';
+
+const RUNS_PER_LAB = 100_000;
+
+let t: TestApp;
+let labs: Awaited<ReturnType<typeof buildLabScenario>>[];
+
+interface PlanNode {
+  'Node Type': string;
+  'Relation Name'?: string;
+  'Index Name'?: string;
+  Plans?: PlanNode[];
+}
+
+function nodes(plan: PlanNode): PlanNode[] {
+  return [plan, ...(plan.Plans ?? []).flatMap(nodes)];
+}
+
+/** Bulk rows straight in SQL (system scope): states spread as a busy lab's would be, one in 50 in review. */
+async function fill(s: Awaited<ReturnType<typeof buildLabScenario>>) {
+  await asSystem(t.sequelize, async (transaction) => {
+    await t.sequelize.query(
+      `INSERT INTO test_runs (organization_id, plan_id, number, state, engineer_id, updated_at, created_at)
+       SELECT :org, :plan, 'BULK-' || g,
+              CASE WHEN g % 50 = 0 THEN 'in-review' WHEN g % 7 = 0 THEN 'testing' WHEN g % 11 = 0 THEN 'approved' ELSE 'issued' END,
+              :engineer, now() - g * interval '1 minute', now() - g * interval '1 minute'
+         FROM generate_series(1, :n) g`,
+      { replacements: { org: s.lab.id, plan: s.plan.id, engineer: s.engineer.id, n: RUNS_PER_LAB }, transaction },
+    );
+    await t.sequelize.query(
+      `INSERT INTO audit_log (organization_id, user_id, action, entity, entity_id, at)
+       SELECT :org, :engineer, 'save-reading', 'test-run', 'bulk-' || g, now() - g * interval '1 minute' FROM generate_series(1, :n) g`,
+      { replacements: { org: s.lab.id, engineer: s.engineer.id, n: RUNS_PER_LAB }, transaction },
+    );
+  });
+}
+
+beforeAll(async () => {
+  t = await startTestApp();
+  labs = [await buildLabScenario(t.sequelize), await buildLabScenario(t.sequelize)];
+  for (const s of labs) await fill(s);
+  // What autovacuum does after a bulk load: fresh statistics and an up-to-date visibility map.
+  await t.sequelize.query('VACUUM ANALYZE test_runs, audit_log, instruments, readings');
+}, 300_000);
+
+afterAll(async () => {
+  if (labs) {
+    await asSystem(t.sequelize, (transaction) => t.sequelize.query("DELETE FROM test_runs WHERE number LIKE 'BULK-%' AND organization_id IN (:orgs)", { replacements: { orgs: labs.map((s) => s.lab.id) }, transaction }));
+  }
+  await t?.close();
+});
+
+const BIG_TABLES = ['test_runs', 'audit_log', 'readings', 'instruments'];
+
+describe('the home queries at 100,000 runs per lab', () => {
+  it.each([
+    ['runs by state', RUNS_BY_STATE, 'test_runs_org_state_updated'],
+    ['awaiting my review', AWAITING_REVIEW, 'test_runs_org_state_updated'],
+    ['calibration due', CALIBRATION_DUE, 'instruments_org_due'],
+    ['recent activity', RECENT_ACTIVITY, 'audit_log_org_at'],
+  ])('%s starts from the index %s and scans no big table sequentially', async (_what, sql, index) => {
+    const s = labs[0];
+    const replacements = { org: s.lab.id, me: s.reviewer.id, soon: addDaysIso(todayIso(), 30), limit: 20 };
+    const [row] = await inTenant(t.sequelize, s.lab.id, () => t.sequelize.query<{ 'QUERY PLAN': { Plan: PlanNode }[] }>(`EXPLAIN (FORMAT JSON) ${sql}`, { replacements, type: QueryTypes.SELECT }));
+    const all = nodes(row['QUERY PLAN'][0].Plan);
+    const described = all.map((n) => `${n['Node Type']} ${n['Relation Name'] ?? ''} ${n['Index Name'] ?? ''}`.trim());
+    expect(all.filter((n) => n['Node Type'] === 'Seq Scan' && BIG_TABLES.includes(n['Relation Name'] ?? '')).map((n) => n['Relation Name'])).toEqual([]);
+    expect(described.join('\n')).toContain(index);
+  });
+
+  it('answers GET /api/home in well under a second', async () => {
+    const s = labs[0];
+    const reviewer = await callerFor(t.app, s.reviewer, s.lab.id);
+    await reviewer('get', '/home'); // warm the connection and the caches
+    const started = process.hrtime.bigint();
+    const res = await reviewer('get', '/home');
+    const ms = Number(process.hrtime.bigint() - started) / 1e6;
+    expect(res.status).toBe(200);
+    // 100,000 / 50 = 2,000 runs in review (the fill's own arithmetic).
+    expect(res.body.runsByState['in-review']).toBe(RUNS_PER_LAB / 50);
+    expect(res.body.awaitingMyReview).toHaveLength(20);
+    expect(res.body.recentActivity).toHaveLength(10);
+    console.log(`GET /api/home with ${RUNS_PER_LAB} runs in the lab: ${ms.toFixed(1)} ms`);
+    expect(ms).toBeLessThan(1000);
+  });
+});
