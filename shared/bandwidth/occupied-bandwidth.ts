@@ -123,15 +123,19 @@ export function occupiedBandwidthFromTrace(
 ): BandLimits {
   const fn = 'occupiedBandwidthFromTrace';
   const levels = requireArrayLike(fn, 'levelDbm', levelDbm);
+  const n = levels.length;
   let maxDbm = -Infinity;
-  for (let i = 0; i < levels.length; i++) {
-    maxDbm = Math.max(maxDbm, requireLevelDb(fn, `levelDbm[${i}]`, levels[i]));
+  for (let i = 0; i < n; i++) {
+    const v = levels[i];
+    // The guard builds its message only for a bad value: no string work per point (hot loop).
+    if (typeof v !== 'number' || (!(v < Infinity) && v !== -Infinity)) requireLevelDb(fn, `levelDbm[${i}]`, v);
+    if (v > maxDbm) maxDbm = v;
   }
   if (maxDbm === -Infinity) throw new RangeError(`${fn}: the trace holds no power`);
-  // Relative to the top bin so levels far from 0 dBm neither overflow nor underflow.
-  const power = Float64Array.from(
-    { length: levels.length },
-    (_, i) => 10 ** ((levels[i] - maxDbm) / 10),
-  );
+  // Relative to the top bin so levels far from 0 dBm neither overflow nor underflow;
+  // 10^(x/10) as exp(x·ln10/10), the same value, cheaper.
+  const power = new Float64Array(n);
+  const k = Math.LN10 / 10;
+  for (let i = 0; i < n; i++) power[i] = Math.exp((levels[i] - maxDbm) * k);
   return occupiedBandwidthFromPowers(frequencyHz, power, options);
 }
