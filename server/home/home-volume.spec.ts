@@ -88,10 +88,10 @@ const indexCondsOn = (plan: PlanNode[], table: string) => plan.filter((n) => n['
 
 describe('the home queries at 100,000 runs per lab', () => {
   it.each([
-    ['awaiting my review', AWAITING_REVIEW, 'test_runs_org_state_updated'],
-    ['calibration due', CALIBRATION_DUE, 'instruments_org_due'],
-    ['recent activity', RECENT_ACTIVITY, 'audit_log_org_at'],
-  ])('%s reads a short range of the index %s and scans no big table sequentially', async (_what, sql, index) => {
+    ['awaiting my review', 'test_runs_org_state_updated', AWAITING_REVIEW],
+    ['calibration due', 'instruments_org_due', CALIBRATION_DUE],
+    ['recent activity', 'audit_log_org_at', RECENT_ACTIVITY],
+  ])('%s reads a short range of the index %s and scans no big table sequentially', async (_what, index, sql) => {
     const plan = await explain(sql, { seqScan: true });
     expect(seqScansOfBigTables(plan)).toEqual([]);
     expect(plan.map((n) => n['Index Name'])).toContain(index);

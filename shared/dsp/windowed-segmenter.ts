@@ -102,7 +102,7 @@ export function createWindowedSegmenter(
       buffer[m + 1] = b * wj;
       const p = a * a + b * b;
       total += p;
-      if (p > top) top = p;
+      top = Math.max(top, p);
     }
     // A NaN or ±Infinity sample makes the total NaN or +Infinity: one check per piece.
     if (Number.isFinite(total)) peak = top;
