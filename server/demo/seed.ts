@@ -3,11 +3,13 @@
  * running it again changes nothing that exists.
  */
 import type { Sequelize } from 'sequelize';
-import { Client, Device, Membership, Organization, RuleSet, TestCase, TestPlan, TestRun, User } from '../db/models';
+import { Client, Device, Instrument, Membership, Organization, RuleSet, RunInstrument, TestCase, TestPlan, TestRun, User } from '../db/models';
 import { asSystem } from '../tenancy/tenant-transaction';
 import { hashPassword } from '../auth/password';
 import { SAMPLE_RULE_SETS } from '../../shared/rules/sample-rule-sets';
 import { DEMO_DEVICES, DEMO_LAB, DEMO_MANUFACTURER, DEMO_PASSWORD, DEMO_PEOPLE } from './demo-scenario';
+import { DEMO_RUN_INSTRUMENT_SERIALS, demoInstruments } from './demo-instruments';
+import { todayIso } from '../instruments/calibration-status';
 
 export async function ensureBuiltInRuleSets(sequelize: Sequelize): Promise<number> {
   return asSystem(sequelize, async (transaction) => {
@@ -43,6 +45,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<{ created: boolean
     );
     const maritime = (await RuleSet.findOne({ where: { organizationId: null, key: 'us-maritime-hf-ssb' }, transaction }))!;
     const engineer = people['tomasz.ellery@kestrelbay.example'];
+    const instruments = [];
+    for (const i of demoInstruments(todayIso())) instruments.push(await Instrument.create({ ...i, organizationId: lab.id }, { transaction }));
     let runNumber = 0;
     for (const [i, d] of DEMO_DEVICES.entries()) {
       const device = await Device.create({ ...d, organizationId: lab.id, clientId: client.id, condition: 'As received, no visible damage' }, { transaction });
@@ -59,7 +63,10 @@ export async function seedDemo(sequelize: Sequelize): Promise<{ created: boolean
       }
       if (i === 0) {
         runNumber++;
-        await TestRun.create({ organizationId: lab.id, planId: plan.id, number: `RUN-${String(runNumber).padStart(6, '0')}`, state: 'testing', engineerId: engineer.id, testedFrom: '2026-11-24' }, { transaction });
+        const run = await TestRun.create({ organizationId: lab.id, planId: plan.id, number: `RUN-${String(runNumber).padStart(6, '0')}`, state: 'testing', engineerId: engineer.id, testedFrom: '2026-11-24' }, { transaction });
+        for (const used of instruments.filter((x) => DEMO_RUN_INSTRUMENT_SERIALS.includes(x.serialNumber))) {
+          await RunInstrument.create({ organizationId: lab.id, runId: run.id, instrumentId: used.id, assignedBy: engineer.id }, { transaction });
+        }
       }
     }
     await sequelize.query("INSERT INTO org_counters (organization_id, name, value) VALUES (:org, 'run', :n)", { replacements: { org: lab.id, n: runNumber }, transaction });

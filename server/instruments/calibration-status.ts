@@ -1,7 +1,8 @@
 /**
- * Calibration status of an instrument on a given day. ISO/IEC 17025:2017 6.4.4 and 6.4.7: equipment
- * is checked and calibrated on a programme, and equipment past its calibration is not used. The
- * 30-day warning window is common practice (time to book the calibration laboratory).
+ * Calibration status of an instrument on a given day. ISO/IEC 17025:2017 6.4.7 (calibration
+ * programme) and 6.4.9 (equipment out of service), clause wording from memory: equipment past its
+ * calibration is not used. The 30-day warning window is common practice (time to book the
+ * calibration laboratory).
  */
 import type { CalibrationStatus } from '../../shared/schemas/instruments';
 

@@ -2,8 +2,8 @@ import { validationFailed, type FieldError } from '../http/problem';
 import type { InstrumentBody } from '../../shared/schemas/instruments';
 
 /**
- * What the schema cannot say about an instrument record: the calibration is in the past (a
- * certificate is issued after the work, ISO/IEC 17025:2017 7.8.4) and it falls due after it was done.
+ * What the schema cannot say about an instrument record: the calibration is not in the future (a
+ * certificate reports work already done, common practice) and it falls due after it was done.
  * Throws a 422 listing every field at fault.
  */
 export function checkInstrument(body: InstrumentBody, today: string): void {

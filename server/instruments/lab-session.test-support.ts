@@ -9,8 +9,8 @@ import { addDaysIso, todayIso } from './calibration-status';
 export type Caller = (method: 'get' | 'post' | 'put', path: string, body?: object) => request.Test;
 
 /** Requests to /api as `user`, with `organizationId` as the active organization. */
-export async function callerFor(app: Express, user: { email: string }, organizationId: string): Promise<Caller> {
-  const { token } = await signIn(app, user.email);
+export async function callerFor(app: Express, user: { email: string }, organizationId: string, password?: string): Promise<Caller> {
+  const { token } = await signIn(app, user.email, password);
   return (method, path, body) => {
     const r = request(app)[method](`/api${path}`).set('Authorization', `Bearer ${token}`).set('X-Organization-Id', organizationId);
     return body ? r.send(body) : r;

@@ -1,5 +1,5 @@
 /**
- * The equipment register (ISO/IEC 17025:2017 6.4.13): each instrument with its calibration dates,
+ * The equipment register (ISO/IEC 17025:2017 6.4.13, from memory): each instrument with its calibration dates,
  * certificate and the uncertainty contributions it brings to a measurement. Lab admins and
  * engineers keep it; every lab role reads it.
  */

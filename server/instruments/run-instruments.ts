@@ -1,7 +1,7 @@
 /**
  * The instruments used on a test run: which ones, whether each is still in calibration, and the
- * uncertainty contributions they bring. ISO/IEC 17025:2017 6.4.7 and 6.4.9: equipment past its
- * calibration is taken out of service, so a reading taken with it is refused, not stored.
+ * uncertainty contributions they bring. ISO/IEC 17025:2017 6.4.7 and 6.4.9 (from memory): equipment
+ * past its calibration is taken out of service, so a reading taken with it is refused, not stored.
  */
 import { Op } from 'sequelize';
 import { Instrument, RunInstrument, type TestRun } from '../db/models';

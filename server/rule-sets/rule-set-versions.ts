@@ -1,7 +1,7 @@
 /**
  * A lab's own rule sets are versioned: an edit is a new row (same key, version + 1) and the old
  * row never changes, so a plan's snapshot and every result computed from it stay as they were
- * (ISO/IEC 17025:2017 7.11.6, changes to data and software are recorded; 7.2.1.3, the method in use).
+ * (ISO/IEC 17025:2017 7.5 technical records and 7.11 control of data; clause wording from memory).
  * Built-in samples (organization_id NULL) are read-only: a lab copies one to make it its own.
  */
 import { UniqueConstraintError } from 'sequelize';

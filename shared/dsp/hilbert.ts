@@ -56,7 +56,8 @@ function analytic(fn: string, x: ArrayLike<number>): ComplexSamples {
  * (q = H{x}), 'lsb' mirrors them to negative ones (q = −H{x}). Float32 out, as capture files.
  *
  * Source: as {@link analyticSignal}; LSB is the complex conjugate of the USB signal
- * (phasing-method SSB, common practice). Whole-record transform: memory ~ 64 bytes per sample.
+ * (phasing-method SSB, common practice). Whole-record transform (not streaming): memory as
+ * {@link anyLengthDft}, about 100–200 bytes per sample for non-power-of-two lengths.
  * Bad input: as analyticSignal, with messages starting with "realToIq"; sideband other than
  * 'usb' or 'lsb' → RangeError.
  *

@@ -25,7 +25,7 @@ export interface SsbSignalStream {
  * (published); intermod product frequencies f1 − kΔ, f2 + kΔ (common practice).
  * Oscillators: each chunk restarts every phasor from an exact cos/sin of its phase at the chunk's
  * first sample, then rotates it by e^(jω) per sample (drift < 1e-11 over a chunk).
- * * Domain and bad input: see SsbSignalSpec (levels finite, frequencies within ±fs/2, |phase error|
+ * Domain and bad input: see SsbSignalSpec (levels finite, frequencies within ±fs/2, |phase error|
  * < 90°, intermod only with two tones, integer seed); chunkLength an integer ≥ 1 (default 65536).
  * RangeErrors start with "createSsbSignalStream".
  *

@@ -39,8 +39,9 @@ export interface WelchAccumulator {
 
 /**
  * Streaming Welch PSD of complex samples x = i + j·q. Segments of N samples, hop
- * N − floor(overlap·N), are windowed, transformed and their |X[k]|² summed; a partial segment
- * is carried between pushes, so memory is O(N) whatever the record length.
+ * N − floor(overlap·N), are windowed, transformed and their |X[k]|² summed; partial segments
+ * are carried between pushes (⌈N/hop⌉ buffers of N samples, two at 50 % overlap), so memory
+ * does not grow with the record and no STFT matrix is built.
  *
  *   psd[k] = Σ_segments |Σₙ w[n]·x[n]·e^(−j2πkn/N)|² / (fs · Σw² · segments)
  *

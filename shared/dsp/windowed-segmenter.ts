@@ -33,7 +33,7 @@ export function createWindowedSegmenter(
   const n = window.length;
   const ring = Math.ceil(n / hop); // segments open at once, at most
   // Plain arrays of doubles: what fft.js runs fastest on (see ComplexFft).
-  const buffers = Array.from({ length: ring }, () => Array.from({ length: 2 * n }, () => 0));
+  const buffers = Array.from({ length: ring }, () => new Array<number>(2 * n).fill(0));
   let oldest = 0; // index of the oldest open segment; segment s starts at sample s·hop
   let newest = -1; // newest open segment (oldest − 1 when none is open)
   let t = 0; // samples pushed so far
@@ -102,7 +102,7 @@ export function createWindowedSegmenter(
       buffer[m + 1] = b * wj;
       const p = a * a + b * b;
       total += p;
-      top = Math.max(top, p);
+      if (p > top) top = p;
     }
     // A NaN or ±Infinity sample makes the total NaN or +Infinity: one check per piece.
     if (Number.isFinite(total)) peak = top;

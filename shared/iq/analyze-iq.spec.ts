@@ -49,7 +49,7 @@ describe('analyzeIq: synthesizer round trip', () => {
     expect(result.sideband).toBe('usb');
   });
 
-  it('PEP and mean agree with the power module (max |x|², mean |x|²): two independent paths', () => {
+  it('PEP and mean agree with the power module (max and mean of |x|²): two paths', () => {
     const s = synthesizeSsb({ ...twoTone, carrierLeakBelowPepDb: 35 });
     const result = analyzeIq(s.i, s.q, { sampleRateHz: fs });
     expect(result.pepDbfs).toBeCloseTo(db(pepFromEnvelope(s.i, s.q)), 12);

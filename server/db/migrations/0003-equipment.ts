@@ -2,7 +2,7 @@
  * Equipment used in a run, and the indexes the lab's records need at volume.
  *
  * `run_instruments` links a test run to the instruments on the bench (ISO/IEC 17025:2017 6.4.13
- * and 7.5.1: records identify the equipment used). Its foreign keys carry organization_id, so a
+ * equipment records and 7.5.1 technical records; clause wording from memory). Its foreign keys carry organization_id, so a
  * row can only ever join a run and an instrument of the same organization, even if a bug in the
  * application tried otherwise; row-level security is the same tenant policy as every other table.
  */

@@ -26,10 +26,14 @@ export const certificateSignoffSection: CertificateSection = {
     });
     const qrX = frame.rightPt - QR_SIZE_PT + 8;
     drawQrCode(ctx, cert.verificationUrl, qrX, top - 8, QR_SIZE_PT);
-    const textRight = qrX - 4;
-    ctx.text('Verify at', { font: 'medium', sizePt: theme.sizesPt.small, xPt: frame.leftPt + 228, yPt: top + 18, widthPt: textRight - frame.leftPt - 228, align: 'right' });
-    ctx.text(cert.verificationUrl, { sizePt: theme.sizesPt.small, color: theme.colors.accent, xPt: frame.leftPt + 228, widthPt: textRight - frame.leftPt - 228, align: 'right' });
-    ctx.y = Math.max(ctx.y, lineY + 14, top + QR_SIZE_PT - 8) + 10;
+    const textLeft = frame.leftPt + 228;
+    const textWidth = qrX - 4 - textLeft;
+    ctx.text('Verify this certificate', { font: 'medium', sizePt: theme.sizesPt.small, xPt: textLeft, yPt: top + 14, widthPt: textWidth, align: 'right' });
+    ctx.text('Scan the code or open the address below.', { sizePt: theme.sizesPt.small, color: theme.colors.muted, xPt: textLeft, widthPt: textWidth, align: 'right' });
+    // The address on one line under the QR code, right-aligned to the frame, never wrapped.
+    const urlY = Math.max(lineY + 14, top + QR_SIZE_PT - 4);
+    ctx.text(cert.verificationUrl, { font: 'medium', sizePt: theme.sizesPt.small, color: theme.colors.accent, xPt: frame.leftPt, yPt: urlY, widthPt: frame.widthPt, align: 'right' });
+    ctx.y = Math.max(ctx.y, lineY + 14) + 10;
     ctx.text(`End of certificate ${cert.certificateNumber}`, { font: 'medium', sizePt: theme.sizesPt.small, color: theme.colors.accent, align: 'center' });
   },
 };
