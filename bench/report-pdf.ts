@@ -24,7 +24,7 @@ const POINTS_PER_PLOT = 1000;
 
 /** About 20 A4 pages: front matter, a long results table, a long equipment list, 10 figures. */
 function benchReport(): ReportDocument {
-  const results = buildSampleResults({ count: 230, plotCount: PLOTS, pointsPerPlot: POINTS_PER_PLOT }).map((r) =>
+  const results = buildSampleResults({ count: 200, plotCount: PLOTS, pointsPerPlot: POINTS_PER_PLOT }).map((r) =>
     r.testName === 'Two-tone intermodulation' ? { ...r, plot: undefined } : r,
   );
   const base = buildSampleReportDocument();

@@ -31,7 +31,7 @@ export function clientRoutes(): RouteDef[] {
       async handler(ctx) {
         const q = readListQuery(ctx.query, { sortable: ['name', 'createdAt'], filterable: ['search'], defaultSort: 'name' });
         const where = q.filter.search ? { name: { [Op.iLike]: `%${q.filter.search.replace(/[%_\\]/g, '\\$&')}%` } } : {};
-        const { rows, count } = await Client.findAndCountAll({ where, order: [[q.sort, q.direction]], limit: q.pageSize, offset: (q.page - 1) * q.pageSize });
+        const { rows, count } = await Client.findAndCountAll({ where: { ...where, organizationId: ctx.organizationId! }, order: [[q.sort, q.direction]], limit: q.pageSize, offset: (q.page - 1) * q.pageSize });
         return page(rows.map(presentClient), count, q);
       },
     }),

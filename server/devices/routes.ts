@@ -47,7 +47,7 @@ export function deviceRoutes(): RouteDef[] {
           const like = `%${q.filter.search.replace(/[%_\\]/g, '\\$&')}%`;
           where[Op.or] = [{ model: { [Op.iLike]: like } }, { manufacturer: { [Op.iLike]: like } }, { serialNumber: { [Op.iLike]: like } }];
         }
-        const { rows, count } = await Device.findAndCountAll({ where, order: [[q.sort, q.direction]], limit: q.pageSize, offset: (q.page - 1) * q.pageSize });
+        const { rows, count } = await Device.findAndCountAll({ where: { ...where, organizationId: ctx.organizationId! }, order: [[q.sort, q.direction]], limit: q.pageSize, offset: (q.page - 1) * q.pageSize });
         return page(rows.map(presentDevice), count, q);
       },
     }),

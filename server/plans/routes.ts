@@ -26,7 +26,7 @@ export function planRoutes(): RouteDef[] {
       async handler(ctx) {
         const q = readListQuery(ctx.query, { sortable: ['name', 'createdAt'], filterable: ['deviceId'], defaultSort: '-createdAt' });
         const where = q.filter.deviceId ? { deviceId: q.filter.deviceId } : {};
-        const { rows, count } = await TestPlan.findAndCountAll({ where, order: [[q.sort, q.direction]], limit: q.pageSize, offset: (q.page - 1) * q.pageSize });
+        const { rows, count } = await TestPlan.findAndCountAll({ where: { ...where, organizationId: ctx.organizationId! }, order: [[q.sort, q.direction]], limit: q.pageSize, offset: (q.page - 1) * q.pageSize });
         return page(rows.map((p) => ({ id: p.id, name: p.name, deviceId: p.deviceId, ruleSetId: p.ruleSetId, ruleSetName: (p.ruleSetSnapshot as { name?: string }).name ?? null, createdAt: p.createdAt.toISOString() })), count, q);
       },
     }),

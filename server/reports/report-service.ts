@@ -140,16 +140,17 @@ export function presentReport(r: Report, changes: ReportStatusChange[]) {
   };
 }
 
-export async function listReports(sequelize: Sequelize, q: { limit: number; offset: number; search?: string; sort: string; direction: 'ASC' | 'DESC' }) {
+export async function listReports(sequelize: Sequelize, q: { organizationId: string; limit: number; offset: number; search?: string; sort: string; direction: 'ASC' | 'DESC' }) {
   const SORT: Record<string, string> = { issuedAt: 'r.issued_at', reportNumber: 'r.report_number' };
-  const where = q.search ? `WHERE r.report_number ILIKE :like OR r.summary->>'device' ILIKE :like OR r.summary->>'client' ILIKE :like` : '';
+  // Explicit organization predicate (a lab's own, or a manufacturer's as client) so the indexes apply.
+  const where = `WHERE (r.organization_id = :org OR r.client_organization_id = :org)${q.search ? ` AND (r.report_number ILIKE :like OR r.summary->>'device' ILIKE :like OR r.summary->>'client' ILIKE :like)` : ''}`;
   const rows = await sequelize.query<Record<string, unknown>>(
     `SELECT r.id, r.run_id AS "runId", r.report_number AS "reportNumber", r.revision, r.sha256, r.page_count AS "pageCount", r.summary,
             r.issued_at AS "issuedAt", r.verify_token AS "verifyToken",
             (SELECT s.status FROM report_status_changes s WHERE s.report_id = r.id ORDER BY s.created_at DESC LIMIT 1) AS status,
             count(*) OVER () AS total
        FROM reports r ${where} ORDER BY ${SORT[q.sort] ?? 'r.issued_at'} ${q.direction}, r.id LIMIT :limit OFFSET :offset`,
-    { replacements: { limit: q.limit, offset: q.offset, like: `%${(q.search ?? '').replace(/[%_\\]/g, '\\$&')}%` }, type: QueryTypes.SELECT },
+    { replacements: { org: q.organizationId, limit: q.limit, offset: q.offset, like: `%${(q.search ?? '').replace(/[%_\\]/g, '\\$&')}%` }, type: QueryTypes.SELECT },
   );
   return {
     total: rows.length ? Number(rows[0].total) : 0,

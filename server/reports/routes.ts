@@ -50,7 +50,7 @@ export function reportRoutes(deps: ReportDeps): RouteDef[] {
       access: { kind: 'member', roles: READERS },
       async handler(ctx) {
         const q = readListQuery(ctx.query, { sortable: ['issuedAt', 'reportNumber'], filterable: ['search'], defaultSort: '-issuedAt' });
-        const { items, total } = await listReports(deps.sequelize, { limit: q.pageSize, offset: (q.page - 1) * q.pageSize, search: q.filter.search, sort: q.sort, direction: q.direction });
+        const { items, total } = await listReports(deps.sequelize, { organizationId: ctx.organizationId!, limit: q.pageSize, offset: (q.page - 1) * q.pageSize, search: q.filter.search, sort: q.sort, direction: q.direction });
         return page(items, total, q);
       },
     }),

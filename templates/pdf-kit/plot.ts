@@ -1,7 +1,7 @@
 /**
  * Draws a {@link PlotSpec} as vector graphics (moveTo/lineTo paths, no images): title, legend,
  * axes with ticks, traces as lines, limits as dashed lines, intermodulation products as stems and
- * the worst point circled with its label. Long traces are thinned with min-max buckets at about
+ * the worst point circled, its label in the legend. Long traces are thinned with min-max buckets at about
  * two buckets per point of plot width, which keeps every peak visible.
  */
 import { decimateMinMax } from './min-max-decimation';
@@ -70,6 +70,12 @@ function drawLegend(ctx: RenderContext, spec: PlotSpec, box: BoxPt, y: number): 
     doc.fillColor(theme.colors.text).text(name, x + 18, y, { lineBreak: false });
     x += 28 + doc.widthOfString(name);
   }
+  if (spec.marker) {
+    // The marker's label sits in the legend, so it can never cover a trace or limit line.
+    const label = toPrintableText(spec.marker.label);
+    doc.circle(x + 4, y + 4, 3).lineWidth(1.1).strokeColor(theme.colors.limit).stroke();
+    doc.font('medium').fillColor(theme.colors.limit).text(label, x + 11, y, { lineBreak: false });
+  }
 }
 
 /**
@@ -113,16 +119,7 @@ export function drawPlot(ctx: RenderContext, spec: PlotSpec, box: BoxPt): void {
   for (const series of spec.series) drawSeries(ctx, series, map);
   doc.restore();
   if (spec.marker && !empty) {
-    const mx = map.toPageX(spec.marker.x);
-    const my = map.toPageY(spec.marker.y);
-    doc.circle(mx, my, 4).lineWidth(1.2).strokeColor(theme.colors.limit).stroke();
-    const label = toPrintableText(spec.marker.label);
-    doc.font('medium').fontSize(theme.sizesPt.tiny);
-    const w = doc.widthOfString(label);
-    const lx = mx + 7 + w > area.xPt + area.widthPt ? mx - 7 - w : mx + 7;
-    const ly = Math.min(Math.max(my - 12, area.yPt + 2), area.yPt + area.heightPt - 10);
-    doc.rect(lx - 2, ly - 1, w + 4, 9).fill('#ffffff');
-    doc.fillColor(theme.colors.limit).text(label, lx, ly, { lineBreak: false });
+    doc.circle(map.toPageX(spec.marker.x), map.toPageY(spec.marker.y), 4).lineWidth(1.2).strokeColor(theme.colors.limit).stroke();
   }
   ctx.y = box.yPt + box.heightPt;
 }

@@ -61,6 +61,8 @@ export async function renderSectionsToPdf<T>(
     pdfVersion: '1.7',
     lang: 'en-GB',
     displayTitle: true,
+    // No default font: pdfkit would otherwise parse the Helvetica metrics for every document.
+    font: '',
     info: {
       Title: metadata.title,
       Author: metadata.author,

@@ -24,7 +24,7 @@ export class PlansApi {
   private readonly http = inject(HttpClient);
 
   ruleSets(): Observable<{ items: RuleSetRow[] }> {
-    return this.http.get<{ items: RuleSetRow[] }>('/api/rule-sets');
+    return this.http.get<{ items: RuleSetRow[] }>('/api/rule-sets', { params: { latest: 'true', pageSize: 200 } });
   }
 
   create(body: CreatePlanBody): Observable<PlanDetail> {

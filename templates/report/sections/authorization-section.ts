@@ -22,8 +22,9 @@ function personBlock(ctx: RenderContext, caption: string, person: ReportPerson, 
 export const authorizationSection: ReportSection = {
   id: 'authorization',
   render(ctx, report) {
+    // Sign-off, verification block and end mark stay on one page (about 250 pt together).
+    ctx.ensureSpace(250);
     ctx.heading('Authorization');
-    ctx.ensureSpace(120);
     const { frame, doc, theme } = ctx;
     const half = frame.widthPt / 2;
     const top = ctx.y;

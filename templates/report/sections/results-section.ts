@@ -17,11 +17,13 @@ export const resultsSection: ReportSection = {
       'The results relate only to the item tested. Margin is the distance to the limit, positive when the value is inside the limit. ' +
         'U is the expanded uncertainty with its coverage factor k.',
     );
+    // Equal notes share one number, so a repeated remark is listed once.
     const notes: string[] = [];
     const rows = report.results.map((result) => {
       if (!result.note) return resultRowCells(result);
-      notes.push(result.note);
-      return resultRowCells(result, notes.length);
+      let index = notes.indexOf(result.note);
+      if (index < 0) index = notes.push(result.note) - 1;
+      return resultRowCells(result, index + 1);
     });
     const verdictColumn = RESULT_COLUMNS.length - 1;
     drawTable(ctx, {

@@ -12,7 +12,8 @@ export const verificationSection: ReportSection = {
   id: 'verification',
   render(ctx, report) {
     const { frame, theme } = ctx;
-    ctx.ensureSpace(QR_SIZE_PT + 12);
+    // Room for the end mark too, so it never stands alone on the last page.
+    ctx.ensureSpace(QR_SIZE_PT + 56);
     ctx.gap(6);
     const top = ctx.y;
     drawQrCode(ctx, report.verificationUrl, frame.leftPt - 8, top, QR_SIZE_PT);
