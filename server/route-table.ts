@@ -5,6 +5,7 @@ import { buildOpenApi } from './http/openapi';
 import { ENGINE_VERSION } from '../shared/engine-version';
 import { authRoutes } from './auth/routes';
 import { clientRoutes } from './clients/routes';
+import { commentRoutes } from './comments/routes';
 import { deviceRoutes } from './devices/routes';
 import { healthRoutes } from './health/routes';
 import { homeRoutes } from './home/routes';
@@ -34,6 +35,7 @@ export function routeTable(deps: RouteTableDeps): RouteDef[] {
     ...homeRoutes(deps.sequelize),
     ...planRoutes(),
     ...runRoutes(deps.sequelize),
+    ...commentRoutes(),
     ...reportRoutes(deps.reports),
   ] as RouteDef[];
   const openApi: RouteDef = route({

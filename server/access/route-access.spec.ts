@@ -48,6 +48,8 @@ const EXPECTED: Record<string, Expect> = {
   'post /runs/:id/submit': ['lab-admin', 'engineer'],
   'post /runs/:id/return': ['lab-admin', 'reviewer'],
   'post /runs/:id/approve': ['lab-admin', 'reviewer'],
+  'get /runs/:id/cases/:caseId/comments': ['lab-admin', 'engineer', 'reviewer'],
+  'post /runs/:id/cases/:caseId/comments': ['lab-admin', 'engineer', 'reviewer'],
   'post /runs/:id/issue': ['lab-admin', 'reviewer'],
   'post /reports/:id/withdraw': ['lab-admin', 'reviewer'],
   'post /runs/:id/revise': ['lab-admin', 'reviewer'],

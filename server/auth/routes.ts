@@ -8,6 +8,7 @@ import { asSystem } from '../tenancy/tenant-transaction';
 import { AuditEntry } from '../db/models';
 import { DUMMY_HASH, verifyPassword } from './password';
 import { issueRefreshToken, loadPrincipal, revokeAllRefreshTokens, revokeRefreshToken, rotateRefreshToken, signAccessToken, type TokenSettings } from './tokens';
+import { clearAccountFailures, recordSignInFailure, refuseThrottledSignIn } from '../accounts/sign-in-limiter';
 
 export const REFRESH_COOKIE = 'sidecheck_refresh';
 
@@ -17,7 +18,10 @@ export interface AuthDeps {
   secureCookies: boolean;
 }
 
-function setRefreshCookie(res: Response, token: string, deps: AuthDeps): void {
+/** What opening a session needs (sign-in, sign-up and invitation acceptance share it). */
+export type SessionDeps = Pick<AuthDeps, 'tokens' | 'secureCookies'>;
+
+function setRefreshCookie(res: Response, token: string, deps: SessionDeps): void {
   res.cookie(REFRESH_COOKIE, token, {
     httpOnly: true,
     secure: deps.secureCookies,
@@ -32,10 +36,16 @@ function readRefreshCookie(req: Request): string | null {
   return typeof value === 'string' && value.length > 0 && value.length < 200 ? value : null;
 }
 
-async function session(userId: string, deps: AuthDeps) {
+async function session(userId: string, deps: SessionDeps) {
   const principal = await loadPrincipal(userId);
   if (!principal) throw unauthorized();
   return { accessToken: signAccessToken(principal, deps.tokens), expiresIn: deps.tokens.accessTtlSeconds, user: principal };
+}
+
+/** Set a new refresh cookie for the user and answer like sign-in: access token, lifetime, the person. */
+export async function openSession(res: Response, userId: string, deps: SessionDeps) {
+  setRefreshCookie(res, await issueRefreshToken(userId, deps.tokens), deps);
+  return session(userId, deps);
 }
 
 export function authRoutes(deps: AuthDeps): RouteDef[] {
@@ -48,15 +58,20 @@ export function authRoutes(deps: AuthDeps): RouteDef[] {
       bodySchema: signInSchema,
       transaction: 'none',
       async handler(ctx) {
+        const address = ctx.req.ip ?? 'unknown';
+        await refuseThrottledSignIn(deps.sequelize, ctx.body.email, address);
         const user = await User.findOne({ where: deps.sequelize.where(deps.sequelize.fn('lower', deps.sequelize.col('email')), ctx.body.email.toLowerCase()) });
         const ok = await verifyPassword(user?.passwordHash ?? DUMMY_HASH, ctx.body.password);
         await asSystem(deps.sequelize, (t) =>
           AuditEntry.create({ organizationId: null, userId: user?.id ?? null, action: ok && user ? 'sign-in' : 'sign-in-failed', entity: 'user', entityId: user?.id ?? null, after: { email: ctx.body.email.slice(0, 254) } }, { transaction: t }),
         );
-        if (!user || !ok) throw unauthorized('The e-mail address or password is not right.');
-        setRefreshCookie(ctx.res, await issueRefreshToken(user.id, deps.tokens), deps);
+        if (!user || !ok) {
+          await recordSignInFailure(deps.sequelize, ctx.body.email, address);
+          throw unauthorized('The e-mail address or password is not right.');
+        }
+        await clearAccountFailures(deps.sequelize, ctx.body.email);
         ctx.status(200);
-        return session(user.id, deps);
+        return openSession(ctx.res, user.id, deps);
       },
     }),
     route({

@@ -1,10 +1,12 @@
 import { Umzug, SequelizeStorage } from 'umzug';
 import type { Sequelize } from 'sequelize';
 import { migration as foundation } from './migrations/0001-foundation';
+import { migration as accounts } from './migrations/0002-accounts';
 import { migration as equipment } from './migrations/0003-equipment';
+import { migration as comments } from './migrations/0006-comments';
 
 /** Every migration, in order. Add a new file under migrations/ and append it here. */
-const MIGRATIONS = [foundation, equipment];
+const MIGRATIONS = [foundation, accounts, equipment, comments];
 
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({

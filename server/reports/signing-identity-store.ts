@@ -11,9 +11,9 @@ export async function activeSigningIdentity(organizationId: string, masterKey: s
     row = await SigningIdentity.create({
       organizationId,
       certificatePem: identity.certificatePem,
-      encryptedPrivateKey: encryptPrivateKey(identity.privateKeyPem, masterKey),
+      encryptedPrivateKey: encryptPrivateKey(identity.privateKeyPem, masterKey, { context: organizationId }),
       source: 'generated',
     });
   }
-  return { certificatePem: row.certificatePem, privateKeyPem: decryptPrivateKey(row.encryptedPrivateKey, masterKey) };
+  return { certificatePem: row.certificatePem, privateKeyPem: decryptPrivateKey(row.encryptedPrivateKey, masterKey, { context: organizationId }) };
 }

@@ -8,7 +8,12 @@ import { generateLabSigningIdentity } from './generate-lab-signing-identity';
 // Checked with tools independent of node-forge: Node's X509Certificate and the openssl CLI.
 describe('generateLabSigningIdentity', () => {
   const now = new Date('2025-03-10T12:00:00Z');
-  const identity = generateLabSigningIdentity({ labName: 'Kestrelmoor Radio Test Laboratory', country: 'GB', validityYears: 3, now });
+  const identity = generateLabSigningIdentity({
+    labName: 'Kestrelmoor Radio Test Laboratory',
+    country: 'GB',
+    validityYears: 3,
+    now,
+  });
   const cert = new X509Certificate(identity.certificatePem);
 
   it('issues a self-signed certificate in the lab name that verifies with its own key', () => {
@@ -35,7 +40,11 @@ describe('generateLabSigningIdentity', () => {
   it('limits key usage to digitalSignature and nonRepudiation, critical, with SHA-256 (openssl)', () => {
     const file = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'sidecheck-cert-')), 'cert.pem');
     fs.writeFileSync(file, identity.certificatePem);
-    const text = execFileSync('openssl', ['x509', '-in', file, '-noout', '-text'], { encoding: 'utf8' });
+    const text = execFileSync(
+      'openssl',
+      ['x509', '-in', file, '-noout', '-text'],
+      { encoding: 'utf8' },
+    );
     expect(text).toMatch(/X509v3 Key Usage: critical\s+Digital Signature, Non Repudiation\s*\n/);
     expect(text).toMatch(/Signature Algorithm: sha256WithRSAEncryption/);
     expect(text).toMatch(/X509v3 Basic Constraints: critical\s+CA:FALSE/);

@@ -26,6 +26,10 @@ export function identityToPkcs12(identity: LabSigningIdentity): InMemoryPkcs12 {
   }
   const chain = (identity.chainPems ?? []).map((pem) => forge.pki.certificateFromPem(pem));
   const passphrase = randomBytes(18).toString('base64url');
-  const asn1 = forge.pkcs12.toPkcs12Asn1(key, [cert, ...chain], passphrase, { algorithm: 'aes256', count: 1, useMac: false });
+  const asn1 = forge.pkcs12.toPkcs12Asn1(key, [cert, ...chain], passphrase, {
+    algorithm: 'aes256',
+    count: 1,
+    useMac: false,
+  });
   return { p12Der: Buffer.from(forge.asn1.toDer(asn1).getBytes(), 'binary'), passphrase };
 }

@@ -23,25 +23,38 @@ export interface OpensslFixture {
   passphrase: string;
 }
 
-function openssl(dir: string, args: string[]): void {
-  execFileSync('openssl', args, { cwd: dir, stdio: 'pipe' });
-}
-
 /** Builds all fixtures (about 1 s: four RSA 2048 keys). */
 export function buildOpensslFixture(): OpensslFixture {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sidecheck-p12-'));
+  const openssl = (...args: string[]) => execFileSync('openssl', args, { cwd: dir, stdio: 'pipe' });
   const passphrase = 's3cret-Passphrase';
-  const subj = '/CN=Uploaded Test Lab/O=Uploaded Test Lab/C=GB';
+  const pass = `pass:${passphrase}`;
+  const newKey = ['-newkey', 'rsa:2048', '-nodes'];
   const usage = 'keyUsage=critical,digitalSignature,nonRepudiation';
-  openssl(dir, ['req', '-x509', '-newkey', 'rsa:2048', '-nodes', '-keyout', 'key.pem', '-out', 'cert.pem', '-days', '30', '-subj', subj, '-addext', usage]);
-  openssl(dir, ['pkcs12', '-export', '-inkey', 'key.pem', '-in', 'cert.pem', '-out', 'modern.p12', '-passout', `pass:${passphrase}`]);
-  openssl(dir, ['pkcs12', '-export', '-inkey', 'key.pem', '-in', 'cert.pem', '-out', 'legacy.p12', '-passout', `pass:${passphrase}`, '-certpbe', 'PBE-SHA1-3DES', '-keypbe', 'PBE-SHA1-3DES', '-macalg', 'sha1']);
-  openssl(dir, ['req', '-x509', '-newkey', 'rsa:2048', '-nodes', '-keyout', 'ca.key', '-out', 'ca.pem', '-days', '60', '-subj', '/CN=Test Lab Root CA/O=Uploaded Test Lab', '-addext', 'keyUsage=critical,keyCertSign,cRLSign', '-addext', 'basicConstraints=critical,CA:TRUE']);
-  openssl(dir, ['req', '-new', '-newkey', 'rsa:2048', '-nodes', '-keyout', 'leaf.key', '-out', 'leaf.csr', '-subj', '/CN=Uploaded Test Lab Signer/O=Uploaded Test Lab']);
+  const subj = '/CN=Uploaded Test Lab/O=Uploaded Test Lab/C=GB';
+  const selfSigned = (key: string, cert: string, days: string, subject: string, ...ext: string[]) =>
+    openssl('req', '-x509', ...newKey, '-keyout', key, '-out', cert, '-days', days, '-subj', subject,
+      ...ext);
+  selfSigned('key.pem', 'cert.pem', '30', subj, '-addext', usage);
+  const exportKey = (key: string, cert: string, out: string, ...extra: string[]) =>
+    openssl('pkcs12', '-export', '-inkey', key, '-in', cert, '-out', out, '-passout', pass,
+      ...extra);
+  exportKey('key.pem', 'cert.pem', 'modern.p12');
+  const legacy = ['-certpbe', 'PBE-SHA1-3DES', '-keypbe', 'PBE-SHA1-3DES', '-macalg', 'sha1'];
+  exportKey('key.pem', 'cert.pem', 'legacy.p12', ...legacy);
+  const caExt = [
+    ...['-addext', 'keyUsage=critical,keyCertSign,cRLSign'],
+    ...['-addext', 'basicConstraints=critical,CA:TRUE'],
+  ];
+  selfSigned('ca.key', 'ca.pem', '60', '/CN=Test Lab Root CA/O=Uploaded Test Lab', ...caExt);
+  const leafSubj = '/CN=Uploaded Test Lab Signer/O=Uploaded Test Lab';
+  openssl('req', '-new', ...newKey, '-keyout', 'leaf.key', '-out', 'leaf.csr', '-subj', leafSubj);
   fs.writeFileSync(path.join(dir, 'leaf.ext'), `${usage}\nbasicConstraints=critical,CA:FALSE\n`);
-  openssl(dir, ['x509', '-req', '-in', 'leaf.csr', '-CA', 'ca.pem', '-CAkey', 'ca.key', '-CAcreateserial', '-out', 'leaf.pem', '-days', '30', '-extfile', 'leaf.ext']);
-  openssl(dir, ['pkcs12', '-export', '-inkey', 'leaf.key', '-in', 'leaf.pem', '-certfile', 'ca.pem', '-out', 'chained.p12', '-passout', `pass:${passphrase}`]);
-  openssl(dir, ['pkcs12', '-export', '-inkey', 'ca.key', '-in', 'ca.pem', '-out', 'ca-only.p12', '-passout', `pass:${passphrase}`]);
+  const ca = ['-CA', 'ca.pem', '-CAkey', 'ca.key', '-CAcreateserial'];
+  const leafOut = ['-out', 'leaf.pem', '-days', '30', '-extfile', 'leaf.ext'];
+  openssl('x509', '-req', '-in', 'leaf.csr', ...ca, ...leafOut);
+  exportKey('leaf.key', 'leaf.pem', 'chained.p12', '-certfile', 'ca.pem');
+  exportKey('ca.key', 'ca.pem', 'ca-only.p12');
   const read = (name: string) => fs.readFileSync(path.join(dir, name));
   return {
     dir,

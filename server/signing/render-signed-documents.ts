@@ -22,7 +22,11 @@ export interface SignedPdf {
  * Renders and signs a test report; the signature names the authorizing person and the lab.
  * @example const { pdf, sha256, pageCount } = await renderSignedReport(report, identity);
  */
-export async function renderSignedReport(report: ReportDocument, identity: LabSigningIdentity, options: SignPdfOptions = {}): Promise<SignedPdf> {
+export async function renderSignedReport(
+  report: ReportDocument,
+  identity: LabSigningIdentity,
+  options: SignPdfOptions = {},
+): Promise<SignedPdf> {
   const { pdf, pageCount } = await renderReportPdf(report);
   const signed = await signPdf(pdf, identity, {
     reason: `Test report ${report.reportNumber} revision ${report.revision} authorized`,
@@ -36,9 +40,14 @@ export async function renderSignedReport(report: ReportDocument, identity: LabSi
 
 /**
  * Renders and signs a compliance certificate (build it with buildCertificateDocument).
- * @example const { pdf } = await renderSignedCertificate(buildCertificateDocument(report), identity);
+ * @example await renderSignedCertificate(buildCertificateDocument(report), identity)
+ *   // { pdf, sha256, pageCount: 1 }
  */
-export async function renderSignedCertificate(cert: CertificateDocument, identity: LabSigningIdentity, options: SignPdfOptions = {}): Promise<SignedPdf> {
+export async function renderSignedCertificate(
+  cert: CertificateDocument,
+  identity: LabSigningIdentity,
+  options: SignPdfOptions = {},
+): Promise<SignedPdf> {
   const { pdf, pageCount } = await renderCertificatePdf(cert);
   const signed = await signPdf(pdf, identity, {
     reason: `Certificate ${cert.certificateNumber} authorized`,

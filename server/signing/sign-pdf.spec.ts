@@ -12,14 +12,25 @@ const VALID = 'Signature Validation: Signature is Valid.';
 
 describe('signPdf', () => {
   jest.setTimeout(60000);
-  const identity = generateLabSigningIdentity({ labName: 'Kestrelmoor Radio Test Laboratory', country: 'GB' });
+  const identity = generateLabSigningIdentity({
+    labName: 'Kestrelmoor Radio Test Laboratory',
+    country: 'GB',
+  });
   let unsigned: Buffer;
   let signed: Buffer;
   let signedFile: string;
 
   beforeAll(async () => {
     unsigned = (await renderReportPdf(buildSampleReportDocument())).pdf;
-    signed = await signPdf(unsigned, identity, { reason: 'Report KRT-2025-0142 authorized', name: 'Dr Ilse Marrow', location: 'Port Ellery' });
+    signed = await signPdf(
+      unsigned,
+      identity,
+      {
+        reason: 'Report KRT-2025-0142 authorized',
+        name: 'Dr Ilse Marrow',
+        location: 'Port Ellery',
+      },
+    );
     signedFile = savePdfArtifact('sign-pdf-spec-signed', signed);
   });
 
@@ -61,9 +72,16 @@ describe('signPdf', () => {
   });
 
   it('refuses input that is not a PDF and a key that does not match the certificate', async () => {
-    await expect(signPdf(Buffer.from('hello'), identity)).rejects.toThrow(/^signPdf: input is not a PDF/);
+    await expect(signPdf(Buffer.from('hello'), identity)).rejects.toThrow(
+      /^signPdf: input is not a PDF/,
+    );
     const other = generateLabSigningIdentity({ labName: 'Other Lab', keyBits: 2048 });
-    await expect(signPdf(unsigned, { certificatePem: identity.certificatePem, privateKeyPem: other.privateKeyPem })).rejects.toThrow(
+    await expect(
+      signPdf(
+        unsigned,
+        { certificatePem: identity.certificatePem, privateKeyPem: other.privateKeyPem },
+      ),
+    ).rejects.toThrow(
       /identityToPkcs12: the private key does not match/,
     );
   });

@@ -16,7 +16,7 @@ export interface SignPdfOptions {
   reason?: string;
   /** Where it is signed, usually the lab's town (default empty). */
   location?: string;
-  /** The signer's name (default: taken from the certificate by readers; here "Authorized signatory"). */
+  /** The signer's name as shown by readers (default "Authorized signatory"). */
   name?: string;
   /** Contact of the signer, usually the lab's e-mail (default empty). */
   contactInfo?: string;
@@ -24,15 +24,20 @@ export interface SignPdfOptions {
   signingTime?: Date;
 }
 
-/** Bytes reserved for the CMS signature: enough for a 3072-bit key, its certificate and a short chain. */
+/** Bytes reserved for the CMS signature: a 3072-bit key, its certificate and a short chain fit. */
 const SIGNATURE_LENGTH = 8192;
 
 /**
  * Returns the signed PDF. Input that is not a PDF throws a RangeError; a key that does not match
  * the certificate throws a RangeError (from identityToPkcs12).
- * @example const signed = await signPdf(pdf, identity, { reason: 'Report KRT-2025-0142 authorized' });
+ * @example await signPdf(pdf, identity, { reason: 'Report KRT-2025-0142 authorized' })
+ *   // <Buffer 25 50 44 46 ...> (the input plus an incremental update with the signature)
  */
-export async function signPdf(pdf: Buffer, identity: LabSigningIdentity, options: SignPdfOptions = {}): Promise<Buffer> {
+export async function signPdf(
+  pdf: Buffer,
+  identity: LabSigningIdentity,
+  options: SignPdfOptions = {},
+): Promise<Buffer> {
   if (!Buffer.isBuffer(pdf) || pdf.subarray(0, 5).toString('latin1') !== '%PDF-') {
     throw new RangeError('signPdf: input is not a PDF file');
   }
@@ -46,5 +51,6 @@ export async function signPdf(pdf: Buffer, identity: LabSigningIdentity, options
     signatureLength: SIGNATURE_LENGTH,
     ...(options.signingTime ? { signingTime: options.signingTime } : {}),
   });
-  return new SignPdf().sign(withPlaceholder, new P12Signer(p12Der, { passphrase }), options.signingTime);
+  const signer = new P12Signer(p12Der, { passphrase });
+  return new SignPdf().sign(withPlaceholder, signer, options.signingTime);
 }

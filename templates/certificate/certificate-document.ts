@@ -4,7 +4,11 @@
  * refers to the full report by number and revision.
  */
 import type { ReportDocument, ReportVerdict } from '../report/report-document';
-import { overallVerdict, summariseVerdicts, type TestVerdictSummary } from '../report/summarise-verdicts';
+import {
+  overallVerdict,
+  summariseVerdicts,
+  type TestVerdictSummary,
+} from '../report/summarise-verdicts';
 
 export interface CertificateDocument {
   certificateNumber: string;
@@ -36,17 +40,31 @@ export interface CertificateOptions {
 /**
  * Builds the certificate data from a report. A report without results throws a RangeError (a
  * certificate must state at least one verdict).
- * @example buildCertificateDocument(buildSampleReportDocument()).certificateNumber // 'KRT-2025-0142-C'
+ * @example buildCertificateDocument(buildSampleReportDocument()).certificateNumber
+ *   // 'KRT-2025-0142-C'
  */
-export function buildCertificateDocument(report: ReportDocument, options: CertificateOptions = {}): CertificateDocument {
-  if (report.results.length === 0) throw new RangeError('buildCertificateDocument: the report has no results to certify');
+export function buildCertificateDocument(
+  report: ReportDocument,
+  options: CertificateOptions = {},
+): CertificateDocument {
+  if (report.results.length === 0) {
+    throw new RangeError('buildCertificateDocument: the report has no results to certify');
+  }
   return {
     certificateNumber: options.certificateNumber ?? `${report.reportNumber}-C`,
-    report: { reportNumber: report.reportNumber, revision: report.revision, issued: report.dates.issued, title: report.title },
+    report: {
+      reportNumber: report.reportNumber,
+      revision: report.revision,
+      issued: report.dates.issued,
+      title: report.title,
+    },
     lab: report.lab,
     client: { name: report.client.name, addressLines: report.client.addressLines },
     device: report.device,
-    method: { ruleSetName: report.method.ruleSetName, ruleSetVersion: report.method.ruleSetVersion },
+    method: {
+      ruleSetName: report.method.ruleSetName,
+      ruleSetVersion: report.method.ruleSetVersion,
+    },
     decisionRule: report.decisionRule,
     tests: summariseVerdicts(report.results),
     overallVerdict: overallVerdict(report.results),
@@ -62,5 +80,7 @@ export function buildCertificateDocument(report: ReportDocument, options: Certif
  * assessment and says so.
  */
 export function certificateTitle(verdict: ReportVerdict): string {
-  return verdict === 'pass' || verdict === 'conditional-pass' ? 'Certificate of compliance' : 'Summary of conformity assessment';
+  return verdict === 'pass' || verdict === 'conditional-pass'
+    ? 'Certificate of compliance'
+    : 'Summary of conformity assessment';
 }

@@ -1,4 +1,9 @@
-import { pdfPageCount, pdfPageTexts, renderPagesToPng, savePdfArtifact } from '../pdf-kit/pdf-inspection';
+import {
+  pdfPageCount,
+  pdfPageTexts,
+  renderPagesToPng,
+  savePdfArtifact,
+} from '../pdf-kit/pdf-inspection';
 import { buildSampleReportDocument } from '../report/sample-report-document';
 import { buildSampleResults } from '../report/sample-report-results';
 import { buildCertificateDocument, certificateTitle } from './certificate-document';
@@ -40,13 +45,20 @@ describe('compliance certificate', () => {
 
   it('summarises one line per test, not per test point', () => {
     const cert = buildCertificateDocument(report);
-    expect(cert.tests.map((t) => t.testName)).toEqual([...new Set(report.results.map((r) => r.testName))]);
+    expect(cert.tests.map((t) => t.testName)).toEqual(
+      [...new Set(report.results.map((r) => r.testName))],
+    );
     expect(cert.tests.find((t) => t.testName === 'Carrier suppression')?.testPointCount).toBe(2);
   });
 
   it('stays within two pages for a long list of tests', async () => {
-    const results = buildSampleResults({ count: 45, plotCount: 0 }).map((r, i) => ({ ...r, testName: `Test ${i + 1}` }));
-    const { pageCount } = await renderCertificatePdf(buildCertificateDocument(buildSampleReportDocument({ results })));
+    const results = buildSampleResults({
+      count: 45,
+      plotCount: 0,
+    }).map((r, i) => ({ ...r, testName: `Test ${i + 1}` }));
+    const { pageCount } = await renderCertificatePdf(
+      buildCertificateDocument(buildSampleReportDocument({ results })),
+    );
     expect(pageCount).toBe(2);
   });
 
@@ -63,6 +75,8 @@ describe('compliance certificate', () => {
   });
 
   it('refuses a report without results', () => {
-    expect(() => buildCertificateDocument(buildSampleReportDocument({ results: [] }))).toThrow(/^buildCertificateDocument: /);
+    expect(() => buildCertificateDocument(buildSampleReportDocument({ results: [] }))).toThrow(
+      /^buildCertificateDocument: /,
+    );
   });
 });

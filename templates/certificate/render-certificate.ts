@@ -17,17 +17,21 @@ export function renderCertificatePdf(
   options: { sections?: readonly CertificateSection[]; theme?: Theme } = {},
 ): Promise<RenderedPdf> {
   const title = certificateTitle(cert.overallVerdict);
+  const d = cert.device;
+  const r = cert.report;
   return renderSectionsToPdf(cert, options.sections ?? CERTIFICATE_SECTIONS, {
     theme: options.theme,
     metadata: {
       title: `${title} ${cert.certificateNumber}`,
       author: cert.lab.name,
-      subject: `${cert.device.manufacturer} ${cert.device.model}, serial ${cert.device.serialNumber}; report ${cert.report.reportNumber}`,
+      subject: `${d.manufacturer} ${d.model}, serial ${d.serialNumber}; report ${r.reportNumber}`,
     },
     furniture: {
       headerLeft: cert.lab.name,
       headerRight: `Certificate ${cert.certificateNumber}`,
-      footerLeft: `Certificate ${cert.certificateNumber}, refers to report ${cert.report.reportNumber} revision ${cert.report.revision}`,
+      footerLeft:
+        `Certificate ${cert.certificateNumber}, ` +
+        `refers to report ${r.reportNumber} revision ${r.revision}`,
     },
   });
 }

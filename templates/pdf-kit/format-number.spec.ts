@@ -18,6 +18,10 @@ describe('formatNumber', () => {
   });
 
   it('chooses about four significant figures (common practice)', () => {
-    expect([defaultDecimals(46.31), defaultDecimals(-150.2), defaultDecimals(2376)]).toEqual([2, 1, 0]);
+    expect([defaultDecimals(46.31), defaultDecimals(-150.2), defaultDecimals(2376)]).toEqual([
+      2,
+      1,
+      0,
+    ]);
   });
 });

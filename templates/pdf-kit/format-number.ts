@@ -9,7 +9,11 @@
  * @example formatNumber(-3.456, 2) // '\u22123.46'
  * @example formatNumber(6.3, 1, { signed: true }) // '+6.3'
  */
-export function formatNumber(value: number, decimals: number, options: { signed?: boolean } = {}): string {
+export function formatNumber(
+  value: number,
+  decimals: number,
+  options: { signed?: boolean } = {},
+): string {
   if (!Number.isInteger(decimals) || decimals < 0 || decimals > 10) {
     throw new RangeError(`formatNumber: decimals must be a whole number 0..10, got ${decimals}`);
   }

@@ -24,13 +24,20 @@ export interface KeyValueListOptions {
  * An empty value prints as an em dash. Throws a RangeError when the label column leaves no room.
  * @example drawKeyValueList(ctx, [{ label: 'Serial number', value: 'OV15-00231' }]);
  */
-export function drawKeyValueList(ctx: RenderContext, rows: readonly KeyValueRow[], options: KeyValueListOptions = {}): void {
+export function drawKeyValueList(
+  ctx: RenderContext,
+  rows: readonly KeyValueRow[],
+  options: KeyValueListOptions = {},
+): void {
   const { doc, theme } = ctx;
   const xPt = options.xPt ?? ctx.frame.leftPt;
   const widthPt = options.widthPt ?? ctx.frame.rightPt - xPt;
   const labelWidthPt = options.labelWidthPt ?? 150;
   const valueWidthPt = widthPt - labelWidthPt - 8;
-  if (!(valueWidthPt > 20)) throw new RangeError(`drawKeyValueList: label column ${labelWidthPt} pt leaves no room in ${widthPt} pt`);
+  if (!(valueWidthPt > 20)) {
+    const sizes = `label column ${labelWidthPt} pt leaves no room in ${widthPt} pt`;
+    throw new RangeError(`drawKeyValueList: ${sizes}`);
+  }
   const padPt = 3;
   let rules: number[] = [];
   const strokeRules = () => {
@@ -40,9 +47,15 @@ export function drawKeyValueList(ctx: RenderContext, rows: readonly KeyValueRow[
   };
   for (const row of rows) {
     const value = row.value.trim() === '' ? '\u2014' : row.value;
-    const labelStyle = { font: 'medium' as const, color: theme.colors.muted, widthPt: labelWidthPt, xPt };
+    const labelStyle = {
+      font: 'medium' as const,
+      color: theme.colors.muted,
+      widthPt: labelWidthPt,
+      xPt,
+    };
     const valueStyle = { widthPt: valueWidthPt, xPt: xPt + labelWidthPt + 8 };
-    const heightPt = Math.max(ctx.measure(row.label, labelStyle), ctx.measure(value, valueStyle)) + 2 * padPt;
+    const contentPt = Math.max(ctx.measure(row.label, labelStyle), ctx.measure(value, valueStyle));
+    const heightPt = contentPt + 2 * padPt;
     if (ctx.y + heightPt > ctx.frame.bottomPt) {
       strokeRules();
       ctx.addPage();

@@ -29,7 +29,10 @@ describe('decimateMinMax', () => {
   });
 
   it('matches its documented example', () => {
-    expect(decimateMinMax([0, 1, 2, 3, 4, 5, 6], [0, 5, 1, 1, 9, 0, 2], 1)).toEqual({ x: [0, 4], y: [0, 9] });
+    expect(decimateMinMax([0, 1, 2, 3, 4, 5, 6], [0, 5, 1, 1, 9, 0, 2], 1)).toEqual({
+      x: [0, 4],
+      y: [0, 9],
+    });
   });
 
   it('keeps gaps as NaN so the line is broken there', () => {

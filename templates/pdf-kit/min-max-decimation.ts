@@ -14,24 +14,35 @@ export interface XyPoints {
  * Returns the points to draw. Traces with at most `3 * bucketCount` points come back unchanged
  * (copied). Non-finite y values are kept as gaps (one NaN per bucket that had one). x must be
  * ascending. Throws a RangeError for unequal lengths or a bucket count below 1.
- * @example decimateMinMax([0,1,2,3,4,5,6], [0,5,1,1,9,0,2], 1) // { x: [0, 4], y: [0, 9] } (first = lowest, then highest)
+ * @example decimateMinMax([0, 1, 2, 3, 4, 5, 6], [0, 5, 1, 1, 9, 0, 2], 1)
+ *   // { x: [0, 4], y: [0, 9] } (the first point is also the lowest, then the highest)
  */
-export function decimateMinMax(x: ArrayLike<number>, y: ArrayLike<number>, bucketCount: number): XyPoints {
-  if (x.length !== y.length) throw new RangeError(`decimateMinMax: x has ${x.length} points, y has ${y.length}`);
-  if (!(bucketCount >= 1)) throw new RangeError(`decimateMinMax: bucketCount must be >= 1, got ${bucketCount}`);
+export function decimateMinMax(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  bucketCount: number,
+): XyPoints {
+  if (x.length !== y.length) {
+    throw new RangeError(`decimateMinMax: x has ${x.length} points, y has ${y.length}`);
+  }
+  if (!(bucketCount >= 1)) {
+    throw new RangeError(`decimateMinMax: bucketCount must be >= 1, got ${bucketCount}`);
+  }
   const n = x.length;
   if (n <= 3 * bucketCount) return { x: Array.from(x), y: Array.from(y) };
   const x0 = x[0];
   const span = x[n - 1] - x0 || 1;
   const out: XyPoints = { x: [], y: [] };
+  const bucketOf = (k: number) =>
+    Math.min(bucketCount - 1, Math.floor(((x[k] - x0) / span) * bucketCount));
   let i = 0;
   while (i < n) {
-    const bucket = Math.min(bucketCount - 1, Math.floor(((x[i] - x0) / span) * bucketCount));
+    const bucket = bucketOf(i);
     const first = i;
     let lo = -1;
     let hi = -1;
     let gap = false;
-    for (; i < n && Math.min(bucketCount - 1, Math.floor(((x[i] - x0) / span) * bucketCount)) === bucket; i++) {
+    for (; i < n && bucketOf(i) === bucket; i++) {
       const v = y[i];
       if (!Number.isFinite(v)) {
         gap = true;
@@ -40,7 +51,8 @@ export function decimateMinMax(x: ArrayLike<number>, y: ArrayLike<number>, bucke
       if (lo < 0 || v < y[lo]) lo = i;
       if (hi < 0 || v > y[hi]) hi = i;
     }
-    const keep = [...new Set([first, lo, hi].filter((k) => k >= 0 && Number.isFinite(y[k])))].sort((a, b) => a - b);
+    const candidates = [first, lo, hi].filter((k) => k >= 0 && Number.isFinite(y[k]));
+    const keep = [...new Set(candidates)].sort((a, b) => a - b);
     for (const k of keep) {
       out.x.push(x[k]);
       out.y.push(y[k]);

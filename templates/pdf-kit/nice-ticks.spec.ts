@@ -37,16 +37,20 @@ describe('niceTicks', () => {
 
   it('always encloses the data on steps of 1, 2 or 5 x 10^k with a sensible count (property)', () => {
     fc.assert(
-      fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.double({ min: 1e-3, max: 1e6, noNaN: true }), (min, span) => {
+      fc.property(
+        fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+        fc.double({ min: 1e-3, max: 1e6, noNaN: true }),
+        (min, span) => {
         const t = niceTicks(min, min + span);
         const mantissa = t.step / 10 ** Math.floor(Math.log10(t.step) + 1e-9);
         expect([1, 2, 5].some((m) => Math.abs(mantissa - m) < 1e-6)).toBe(true);
-        // A bound within 1e-9 of a step from a tick counts as on it (by design), hence the tolerance.
+        // A bound within 1e-9 step of a tick counts as on it (by design), hence the tolerance.
         expect(t.lo).toBeLessThanOrEqual(min + 1e-6 * t.step);
         expect(t.hi).toBeGreaterThanOrEqual(min + span - 1e-6 * t.step);
         expect(t.ticks.length).toBeGreaterThanOrEqual(3);
         expect(t.ticks.length).toBeLessThanOrEqual(13);
-      }),
+        },
+      ),
       { seed: 20250310, numRuns: 300 },
     );
   });

@@ -20,13 +20,16 @@ export interface AxisTicks {
  * Ticks for data from `min` to `max` with about `targetCount` intervals (default 5).
  * Equal min and max widen to a unit around the value. Non-finite bounds, min > max or a target
  * count below 1 throw a RangeError.
- * @example niceTicks(-3, 47) // { lo: -10, hi: 50, step: 10, ticks: [-10, 0, ..., 50], decimals: 0 }
+ * @example niceTicks(-3, 47)
+ *   // { lo: -10, hi: 50, step: 10, ticks: [-10, 0, 10, 20, 30, 40, 50], decimals: 0 }
  */
 export function niceTicks(min: number, max: number, targetCount = 5): AxisTicks {
   if (!Number.isFinite(min) || !Number.isFinite(max) || min > max) {
     throw new RangeError(`niceTicks: need finite min <= max, got ${min} and ${max}`);
   }
-  if (!(targetCount >= 1)) throw new RangeError(`niceTicks: targetCount must be >= 1, got ${targetCount}`);
+  if (!(targetCount >= 1)) {
+    throw new RangeError(`niceTicks: targetCount must be >= 1, got ${targetCount}`);
+  }
   if (min === max) {
     const half = min === 0 ? 1 : Math.abs(min) * 0.1;
     return niceTicks(min - half, max + half, targetCount);

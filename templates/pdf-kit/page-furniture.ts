@@ -15,9 +15,14 @@ export interface PageFurniture {
 /**
  * Stamps header and footer on each buffered page and returns the page count. Text is drawn with
  * `lineBreak: false` and the bottom margin lifted meanwhile, so pdfkit never adds a page for it.
- * @example stampPageFurniture(doc, DEFAULT_THEME, { headerLeft: 'Lab', headerRight: 'KM-1', footerLeft: 'Report KM-1' }) // 3
+ * @example stampPageFurniture(doc, DEFAULT_THEME, { headerLeft: 'Lab', headerRight: 'R-1',
+ *   footerLeft: 'Report R-1' }) // 3 (the page count)
  */
-export function stampPageFurniture(doc: PDFKit.PDFDocument, theme: Theme, furniture: PageFurniture): number {
+export function stampPageFurniture(
+  doc: PDFKit.PDFDocument,
+  theme: Theme,
+  furniture: PageFurniture,
+): number {
   const { start, count } = doc.bufferedPageRange();
   const m = theme.marginsPt;
   for (let i = 0; i < count; i++) {
@@ -32,10 +37,12 @@ export function stampPageFurniture(doc: PDFKit.PDFDocument, theme: Theme, furnit
     doc.font('regular').fillColor(theme.colors.muted);
     const headerRight = toPrintableText(furniture.headerRight);
     doc.text(headerRight, right - doc.widthOfString(headerRight), headerY, { lineBreak: false });
-    doc.moveTo(m.left, headerY + 13).lineTo(right, headerY + 13).lineWidth(0.5).strokeColor(theme.colors.rule).stroke();
+    doc.moveTo(m.left, headerY + 13).lineTo(right, headerY + 13);
+    doc.lineWidth(0.5).strokeColor(theme.colors.rule).stroke();
 
     const footerY = height - m.bottom + 22;
-    doc.moveTo(m.left, footerY - 7).lineTo(right, footerY - 7).lineWidth(0.5).strokeColor(theme.colors.rule).stroke();
+    doc.moveTo(m.left, footerY - 7).lineTo(right, footerY - 7);
+    doc.lineWidth(0.5).strokeColor(theme.colors.rule).stroke();
     doc.font('regular').fontSize(theme.sizesPt.small).fillColor(theme.colors.muted);
     doc.text(toPrintableText(furniture.footerLeft), m.left, footerY, { lineBreak: false });
     const pageText = `Page ${i + 1} of ${count}`;

@@ -23,7 +23,11 @@ export function savePdfArtifact(name: string, pdf: Buffer): string {
 }
 
 function run(tool: string, args: string[]): string {
-  return execFileSync(tool, args, { encoding: 'latin1', maxBuffer: 64 * 1024 * 1024, stdio: ['ignore', 'pipe', 'pipe'] });
+  return execFileSync(tool, args, {
+    encoding: 'latin1',
+    maxBuffer: 64 * 1024 * 1024,
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
 }
 
 /**
@@ -31,7 +35,8 @@ function run(tool: string, args: string[]): string {
  * order, so each table cell's text stays together; 'layout' keeps the physical arrangement.
  */
 export function pdfPageTexts(file: string, mode: 'raw' | 'layout' = 'raw'): string[] {
-  const out = execFileSync('pdftotext', [`-${mode}`, '-enc', 'UTF-8', file, '-'], { maxBuffer: 64 * 1024 * 1024 }).toString('utf8');
+  const args = [`-${mode}`, '-enc', 'UTF-8', file, '-'];
+  const out = execFileSync('pdftotext', args, { maxBuffer: 64 * 1024 * 1024 }).toString('utf8');
   const pages = out.split('\f');
   if (pages[pages.length - 1].trim() === '') pages.pop();
   return pages;
@@ -47,7 +52,9 @@ export function pdfPageCount(file: string): number {
 /** Renders every page to artifacts/reports/png/<name>-<n>.png and returns the PNG paths. */
 export function renderPagesToPng(file: string, name: string, dpi = 60): string[] {
   const dir = path.join(reportArtifactsDir(), 'png');
-  for (const old of fs.readdirSync(dir)) if (old.startsWith(`${name}-`) && old.endsWith('.png')) fs.unlinkSync(path.join(dir, old));
+  for (const old of fs.readdirSync(dir)) {
+    if (old.startsWith(`${name}-`) && old.endsWith('.png')) fs.unlinkSync(path.join(dir, old));
+  }
   run('pdftoppm', ['-r', String(dpi), '-png', file, path.join(dir, name)]);
   return fs
     .readdirSync(dir)
@@ -88,11 +95,15 @@ export function uncompressedPdf(file: string): string {
 }
 
 /** Grey-level raster of one page (pdftoppm -gray, PGM P5): width, height and 0-255 pixels. */
-export function renderPageGray(file: string, page: number, dpi: number): { width: number; height: number; pixels: Buffer } {
-  const data = execFileSync('pdftoppm', ['-gray', '-r', String(dpi), '-f', String(page), '-l', String(page), '-singlefile', file], {
-    maxBuffer: 256 * 1024 * 1024,
-  });
+export function renderPageGray(
+  file: string,
+  page: number,
+  dpi: number,
+): { width: number; height: number; pixels: Buffer } {
+  const args = ['-gray', '-r', String(dpi), '-f', String(page), '-l', String(page), '-singlefile'];
+  const data = execFileSync('pdftoppm', [...args, file], { maxBuffer: 256 * 1024 * 1024 });
   const header = /^P5\s+(\d+)\s+(\d+)\s+255\s/.exec(data.subarray(0, 64).toString('latin1'));
   if (!header) throw new Error('renderPageGray: pdftoppm did not return a PGM image');
-  return { width: Number(header[1]), height: Number(header[2]), pixels: data.subarray(header[0].length) };
+  const pixels = data.subarray(header[0].length);
+  return { width: Number(header[1]), height: Number(header[2]), pixels };
 }

@@ -38,15 +38,24 @@ export function drawPlotAxes(
   const { doc, theme } = ctx;
   const xTicks = niceTicks(xRange[0], xRange[1], 8);
   const yTicks = niceTicks(yRange[0], yRange[1], 5);
-  const area: BoxPt = { xPt: box.xPt + 46, yPt: box.yPt + 4, widthPt: box.widthPt - 54, heightPt: box.heightPt - 34 };
+  const area: BoxPt = {
+    xPt: box.xPt + 46,
+    yPt: box.yPt + 4,
+    widthPt: box.widthPt - 54,
+    heightPt: box.heightPt - 34,
+  };
   const bottom = area.yPt + area.heightPt;
-  const toPageX = (x: number) => area.xPt + ((x - xTicks.lo) / (xTicks.hi - xTicks.lo)) * area.widthPt;
-  const toPageY = (y: number) => bottom - ((y - yTicks.lo) / (yTicks.hi - yTicks.lo)) * area.heightPt;
+  const xScale = area.widthPt / (xTicks.hi - xTicks.lo);
+  const yScale = area.heightPt / (yTicks.hi - yTicks.lo);
+  const toPageX = (x: number) => area.xPt + (x - xTicks.lo) * xScale;
+  const toPageY = (y: number) => bottom - (y - yTicks.lo) * yScale;
+  const right = area.xPt + area.widthPt;
 
   for (const t of xTicks.ticks) doc.moveTo(toPageX(t), area.yPt).lineTo(toPageX(t), bottom);
-  for (const t of yTicks.ticks) doc.moveTo(area.xPt, toPageY(t)).lineTo(area.xPt + area.widthPt, toPageY(t));
+  for (const t of yTicks.ticks) doc.moveTo(area.xPt, toPageY(t)).lineTo(right, toPageY(t));
   doc.lineWidth(0.3).strokeColor('#e3e7ea').stroke();
-  doc.rect(area.xPt, area.yPt, area.widthPt, area.heightPt).lineWidth(0.6).strokeColor(theme.colors.muted).stroke();
+  doc.rect(area.xPt, area.yPt, area.widthPt, area.heightPt);
+  doc.lineWidth(0.6).strokeColor(theme.colors.muted).stroke();
   for (const t of xTicks.ticks) doc.moveTo(toPageX(t), bottom).lineTo(toPageX(t), bottom + 3);
   for (const t of yTicks.ticks) doc.moveTo(area.xPt - 3, toPageY(t)).lineTo(area.xPt, toPageY(t));
   doc.lineWidth(0.6).stroke();
@@ -59,12 +68,14 @@ export function drawPlotAxes(
   const half = doc.currentLineHeight() / 2;
   for (const t of yTicks.ticks) {
     const label = formatNumber(t, yTicks.decimals);
-    doc.text(label, area.xPt - 5 - doc.widthOfString(label), toPageY(t) - half, { lineBreak: false });
+    const x = area.xPt - 5 - doc.widthOfString(label);
+    doc.text(label, x, toPageY(t) - half, { lineBreak: false });
   }
 
   doc.font('medium').fontSize(theme.sizesPt.small).fillColor(theme.colors.text);
   const xLabel = toPrintableText(labels.xLabel);
-  doc.text(xLabel, area.xPt + (area.widthPt - doc.widthOfString(xLabel)) / 2, bottom + 16, { lineBreak: false });
+  const xLabelLeft = area.xPt + (area.widthPt - doc.widthOfString(xLabel)) / 2;
+  doc.text(xLabel, xLabelLeft, bottom + 16, { lineBreak: false });
   const yLabel = toPrintableText(labels.yLabel);
   const yCentre = area.yPt + area.heightPt / 2;
   doc.save();

@@ -9,7 +9,7 @@ export interface PlotSeries {
   name: string;
   x: ArrayLike<number>;
   y: ArrayLike<number>;
-  /** trace: a solid line; limit: a dashed line in the limit colour; products: stems (IMD spectrum). */
+  /** trace: solid line; limit: dashed line in the limit colour; products: stems (IMD spectrum). */
   role: 'trace' | 'limit' | 'products';
 }
 

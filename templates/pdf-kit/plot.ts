@@ -1,8 +1,8 @@
 /**
  * Draws a {@link PlotSpec} as vector graphics (moveTo/lineTo paths, no images): title, legend,
  * axes with ticks, traces as lines, limits as dashed lines, intermodulation products as stems and
- * the worst point circled, its label in the legend. Long traces are thinned with min-max buckets at about
- * two buckets per point of plot width, which keeps every peak visible.
+ * the worst point circled, its label in the legend. Long traces are thinned with min-max buckets
+ * at about two buckets per point of plot width, which keeps every peak visible.
  */
 import { decimateMinMax } from './min-max-decimation';
 import { drawPlotAxes, type BoxPt, type PlotMapping } from './plot-axes';
@@ -21,7 +21,8 @@ function range(values: ArrayLike<number>, into: [number, number]): void {
 }
 
 function seriesColor(ctx: RenderContext, role: PlotSeries['role']): string {
-  return role === 'limit' ? ctx.theme.colors.limit : role === 'products' ? ctx.theme.colors.text : ctx.theme.colors.accent;
+  const { colors } = ctx.theme;
+  return role === 'limit' ? colors.limit : role === 'products' ? colors.text : colors.accent;
 }
 
 function drawSeries(ctx: RenderContext, series: PlotSeries, map: PlotMapping): void {
@@ -30,11 +31,13 @@ function drawSeries(ctx: RenderContext, series: PlotSeries, map: PlotMapping): v
   if (series.role === 'products') {
     for (let i = 0; i < series.x.length; i++) {
       if (!Number.isFinite(series.y[i])) continue;
-      doc.moveTo(map.toPageX(series.x[i]), bottom).lineTo(map.toPageX(series.x[i]), map.toPageY(series.y[i]));
+      const x = map.toPageX(series.x[i]);
+      doc.moveTo(x, bottom).lineTo(x, map.toPageY(series.y[i]));
     }
     doc.lineWidth(1.1).strokeColor(seriesColor(ctx, 'products')).stroke();
     for (let i = 0; i < series.x.length; i++) {
-      if (Number.isFinite(series.y[i])) doc.circle(map.toPageX(series.x[i]), map.toPageY(series.y[i]), 1.8);
+      if (!Number.isFinite(series.y[i])) continue;
+      doc.circle(map.toPageX(series.x[i]), map.toPageY(series.y[i]), 1.8);
     }
     doc.fillColor(seriesColor(ctx, 'products')).fill();
     return;
@@ -64,7 +67,8 @@ function drawLegend(ctx: RenderContext, spec: PlotSpec, box: BoxPt, y: number): 
   doc.font('regular').fontSize(theme.sizesPt.tiny);
   for (const series of spec.series) {
     const name = toPrintableText(series.name);
-    doc.moveTo(x, y + 4).lineTo(x + 14, y + 4).lineWidth(series.role === 'products' ? 1.1 : 1).strokeColor(seriesColor(ctx, series.role));
+    doc.moveTo(x, y + 4).lineTo(x + 14, y + 4);
+    doc.lineWidth(series.role === 'products' ? 1.1 : 1).strokeColor(seriesColor(ctx, series.role));
     if (series.role === 'limit') doc.dash(3, { space: 1.5 });
     doc.stroke().undash();
     doc.fillColor(theme.colors.text).text(name, x + 18, y, { lineBreak: false });
@@ -86,11 +90,25 @@ function drawLegend(ctx: RenderContext, spec: PlotSpec, box: BoxPt, y: number): 
 export function drawPlot(ctx: RenderContext, spec: PlotSpec, box: BoxPt): void {
   const { doc, theme } = ctx;
   for (const s of spec.series) {
-    if (s.x.length !== s.y.length) throw new RangeError(`drawPlot: series "${s.name}" has ${s.x.length} x and ${s.y.length} y values`);
+    if (s.x.length !== s.y.length) {
+      const counts = `${s.x.length} x and ${s.y.length} y values`;
+      throw new RangeError(`drawPlot: series "${s.name}" has ${counts}`);
+    }
   }
-  ctx.text(spec.title, { font: 'medium', sizePt: theme.sizesPt.subheading, xPt: box.xPt, yPt: box.yPt, widthPt: box.widthPt });
+  ctx.text(spec.title, {
+    font: 'medium',
+    sizePt: theme.sizesPt.subheading,
+    xPt: box.xPt,
+    yPt: box.yPt,
+    widthPt: box.widthPt,
+  });
   drawLegend(ctx, spec, box, box.yPt + 17);
-  const axesBox: BoxPt = { xPt: box.xPt, yPt: box.yPt + 30, widthPt: box.widthPt, heightPt: box.heightPt - 30 };
+  const axesBox: BoxPt = {
+    xPt: box.xPt,
+    yPt: box.yPt + 30,
+    widthPt: box.widthPt,
+    heightPt: box.heightPt - 30,
+  };
   const xRange: [number, number] = [Infinity, -Infinity];
   const yRange: [number, number] = [Infinity, -Infinity];
   for (const s of spec.series) {
@@ -112,14 +130,16 @@ export function drawPlot(ctx: RenderContext, spec: PlotSpec, box: BoxPt): void {
   const { area } = map;
   if (empty) {
     doc.font('regular').fontSize(theme.sizesPt.body).fillColor(theme.colors.muted);
-    doc.text('No data', area.xPt + area.widthPt / 2 - 15, area.yPt + area.heightPt / 2 - 5, { lineBreak: false });
+    const centre = { x: area.xPt + area.widthPt / 2, y: area.yPt + area.heightPt / 2 };
+    doc.text('No data', centre.x - 15, centre.y - 5, { lineBreak: false });
   }
   doc.save();
   doc.rect(area.xPt, area.yPt, area.widthPt, area.heightPt).clip();
   for (const series of spec.series) drawSeries(ctx, series, map);
   doc.restore();
   if (spec.marker && !empty) {
-    doc.circle(map.toPageX(spec.marker.x), map.toPageY(spec.marker.y), 4).lineWidth(1.2).strokeColor(theme.colors.limit).stroke();
+    doc.circle(map.toPageX(spec.marker.x), map.toPageY(spec.marker.y), 4);
+    doc.lineWidth(1.2).strokeColor(theme.colors.limit).stroke();
   }
   ctx.y = box.yPt + box.heightPt;
 }

@@ -1,5 +1,10 @@
 import fs from 'node:fs';
-import { COVERED_ABOVE_LATIN1, GLYPH_FALLBACKS, isPrintableCodePoint, toPrintableText } from './printable-text';
+import {
+  COVERED_ABOVE_LATIN1,
+  GLYPH_FALLBACKS,
+  isPrintableCodePoint,
+  toPrintableText,
+} from './printable-text';
 import { robotoWoffPath } from './roboto-fonts';
 
 // fontkit (the font parser pdfkit itself uses, a separate npm package) reads the cmap of the
@@ -9,12 +14,20 @@ interface FontkitFont {
 }
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const fontkit = require('fontkit') as { create(data: Buffer): FontkitFont };
-const fonts = [400, 500, 700].map((weight) => fontkit.create(fs.readFileSync(robotoWoffPath(weight))));
+const fonts = [
+  400,
+  500,
+  700,
+].map((weight) => fontkit.create(fs.readFileSync(robotoWoffPath(weight))));
 const inAllWeights = (cp: number) => fonts.every((f) => f.hasGlyphForCodePoint(cp));
 
 describe('toPrintableText against the embedded Roboto latin files', () => {
   it('treats as printable only code points every weight can draw', () => {
-    const claimed = [...Array.from({ length: 0x7f - 0x20 }, (_, i) => 0x20 + i), ...Array.from({ length: 0x100 - 0xa0 }, (_, i) => 0xa0 + i), ...COVERED_ABOVE_LATIN1];
+    const claimed = [
+      ...Array.from({ length: 0x7f - 0x20 }, (_, i) => 0x20 + i),
+      ...Array.from({ length: 0x100 - 0xa0 }, (_, i) => 0xa0 + i),
+      ...COVERED_ABOVE_LATIN1,
+    ];
     const missing = claimed.filter((cp) => !inAllWeights(cp)).map((cp) => cp.toString(16));
     expect(missing).toEqual([]);
   });
@@ -27,7 +40,9 @@ describe('toPrintableText against the embedded Roboto latin files', () => {
   });
 
   it('replaces only symbols the font really lacks, with printable spellings', () => {
-    const needless = Object.keys(GLYPH_FALLBACKS).filter((symbol) => inAllWeights(symbol.codePointAt(0)!));
+    const needless = Object.keys(GLYPH_FALLBACKS).filter(
+      (symbol) => inAllWeights(symbol.codePointAt(0)!),
+    );
     expect(needless).toEqual([]);
     for (const spelling of Object.values(GLYPH_FALLBACKS)) {
       for (const ch of spelling) expect(isPrintableCodePoint(ch.codePointAt(0)!)).toBe(true);

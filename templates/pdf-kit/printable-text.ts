@@ -62,7 +62,9 @@ const NEEDS_WORK = /[^\n\x20-\x7e]/;
  * @example toPrintableText('\u2265 40 dB, \u00b1 1.2 dB') // '>= 40 dB, \u00b1 1.2 dB'
  */
 export function toPrintableText(text: string): string {
-  if (typeof text !== 'string') throw new TypeError(`toPrintableText: expected a string, got ${typeof text}`);
+  if (typeof text !== 'string') {
+    throw new TypeError(`toPrintableText: expected a string, got ${typeof text}`);
+  }
   if (!NEEDS_WORK.test(text)) return text;
   let out = '';
   for (const ch of text.normalize('NFC')) {

@@ -1,10 +1,14 @@
 import QRCode from 'qrcode';
 import { renderPageGray, savePdfArtifact } from './pdf-inspection';
 import { drawQrCode, QR_QUIET_ZONE_MODULES } from './qr-code';
+import type { RenderContext } from './render-context';
 import { renderSectionsToPdf } from './render-sections';
 
 const URL_TEXT = 'https://verify.kestrelmoor-rf.example/r/KRT-2025-0142';
-const options = { metadata: { title: 'QR', author: 'test', subject: 'qr' }, furniture: { headerLeft: '', headerRight: '', footerLeft: '' } };
+const options = {
+  metadata: { title: 'QR', author: 'test', subject: 'qr' },
+  furniture: { headerLeft: '', headerRight: '', footerLeft: '' },
+};
 
 describe('drawQrCode', () => {
   jest.setTimeout(20000);
@@ -14,7 +18,11 @@ describe('drawQrCode', () => {
     const yPt = 150;
     const sizePt = 250;
     let count = 0;
-    const { pdf } = await renderSectionsToPdf({}, [{ id: 'qr', render: (ctx) => (count = drawQrCode(ctx, URL_TEXT, xPt, yPt, sizePt)) }], options);
+    const { pdf } = await renderSectionsToPdf(
+      {},
+      [{ id: 'qr', render: (ctx) => (count = drawQrCode(ctx, URL_TEXT, xPt, yPt, sizePt)) }],
+      options,
+    );
     const file = savePdfArtifact('qr-code-spec', pdf);
     // The reference matrix: the qrcode package's own encoding (ISO/IEC 18004) of the same text.
     const { modules } = QRCode.create(URL_TEXT, { errorCorrectionLevel: 'M' });
@@ -29,7 +37,9 @@ describe('drawQrCode', () => {
     };
     let mismatches = 0;
     for (let r = 0; r < modules.size; r++) {
-      for (let c = 0; c < modules.size; c++) if ((pixelAt(r, c) < 128) !== Boolean(modules.get(r, c))) mismatches++;
+      for (let c = 0; c < modules.size; c++) {
+        if (pixelAt(r, c) < 128 !== Boolean(modules.get(r, c))) mismatches++;
+      }
     }
     expect(mismatches).toBe(0);
     for (let i = -QR_QUIET_ZONE_MODULES; i < 0; i++) {
@@ -39,6 +49,7 @@ describe('drawQrCode', () => {
   });
 
   it('rejects empty text', async () => {
-    await expect(renderSectionsToPdf({}, [{ id: 'qr', render: (ctx) => drawQrCode(ctx, '', 0, 0, 10) }], options)).rejects.toThrow(/drawQrCode: /);
+    const section = { id: 'qr', render: (ctx: RenderContext) => drawQrCode(ctx, '', 0, 0, 10) };
+    await expect(renderSectionsToPdf({}, [section], options)).rejects.toThrow(/drawQrCode: /);
   });
 });

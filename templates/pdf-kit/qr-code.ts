@@ -16,7 +16,13 @@ export const QR_QUIET_ZONE_MODULES = 4;
  * Empty text throws a RangeError; text too long for a QR symbol makes the encoder throw.
  * @example drawQrCode(ctx, 'https://verify.example/r/KM-2025-0142', 450, 700, 80) // 29 (version 3)
  */
-export function drawQrCode(ctx: RenderContext, text: string, xPt: number, yPt: number, sizePt: number): number {
+export function drawQrCode(
+  ctx: RenderContext,
+  text: string,
+  xPt: number,
+  yPt: number,
+  sizePt: number,
+): number {
   if (text.length === 0) throw new RangeError('drawQrCode: text must not be empty');
   const { modules } = QRCode.create(text, { errorCorrectionLevel: 'M' });
   const count = modules.size;
@@ -35,7 +41,8 @@ export function drawQrCode(ctx: RenderContext, text: string, xPt: number, yPt: n
       }
       const start = col;
       while (col < count && modules.get(row, col)) col++;
-      doc.rect(originX + start * modulePt, originY + row * modulePt, (col - start) * modulePt, modulePt);
+      const x = originX + start * modulePt;
+      doc.rect(x, originY + row * modulePt, (col - start) * modulePt, modulePt);
     }
   }
   doc.fillColor('#000000').fill();

@@ -67,7 +67,7 @@ export class RenderContext {
     this.doc.y = this.frame.topPt;
   }
 
-  /** Starts a new page unless `heightPt` still fits above the bottom margin (or the page is empty). */
+  /** Starts a new page unless `heightPt` fits above the bottom margin (or the page is empty). */
   ensureSpace(heightPt: number): void {
     if (this.y + heightPt > this.frame.bottomPt && this.y > this.frame.topPt + 1) this.addPage();
   }

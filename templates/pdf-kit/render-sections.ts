@@ -10,7 +10,7 @@ import { RenderContext } from './render-context';
 import { registerRobotoFonts } from './roboto-fonts';
 import { DEFAULT_THEME, type Theme } from './theme';
 
-/** One part of a document: an id (unique within its list) and a renderer drawing from the cursor. */
+/** One part of a document: an id (unique in its list) and a renderer drawing from the cursor. */
 export interface DocumentSection<T> {
   readonly id: string;
   render(ctx: RenderContext, data: T): void;
@@ -40,7 +40,8 @@ export interface RenderOptions {
  * Renders `data` through `sections` into a PDF. Duplicate section ids throw a RangeError before
  * drawing; an error inside a section is rethrown as an Error naming the section (original as
  * `cause`).
- * @example await renderSectionsToPdf(report, REPORT_SECTIONS, options) // { pdf: <Buffer 25 50 44 46 ...>, pageCount: 9 }
+ * @example await renderSectionsToPdf(report, REPORT_SECTIONS, options)
+ *   // { pdf: <Buffer 25 50 44 46 ...>, pageCount: 5 }
  */
 export async function renderSectionsToPdf<T>(
   data: T,
@@ -49,7 +50,9 @@ export async function renderSectionsToPdf<T>(
 ): Promise<RenderedPdf> {
   const ids = new Set<string>();
   for (const section of sections) {
-    if (ids.has(section.id)) throw new RangeError(`renderSectionsToPdf: duplicate section id "${section.id}"`);
+    if (ids.has(section.id)) {
+      throw new RangeError(`renderSectionsToPdf: duplicate section id "${section.id}"`);
+    }
     ids.add(section.id);
   }
   const theme = options.theme ?? DEFAULT_THEME;
@@ -88,7 +91,10 @@ export async function renderSectionsToPdf<T>(
     } catch (error) {
       doc.end();
       await finished.catch(() => undefined);
-      throw new Error(`renderSectionsToPdf: section "${section.id}" failed: ${(error as Error).message}`, { cause: error });
+      const reason = (error as Error).message;
+      throw new Error(`renderSectionsToPdf: section "${section.id}" failed: ${reason}`, {
+        cause: error,
+      });
     }
   }
   const pageCount = stampPageFurniture(doc, theme, options.furniture);

@@ -24,7 +24,8 @@ export function robotoWoffPath(weight: number): string {
 /** The fonts as TrueType bytes, read and unwrapped once per process, shared by every document. */
 export function robotoFontFiles(): Record<FontRole, Buffer> {
   if (!cachedFiles) {
-    const read = (role: FontRole) => woffToSfnt(fs.readFileSync(robotoWoffPath(WEIGHT_BY_ROLE[role])));
+    const read = (role: FontRole) =>
+      woffToSfnt(fs.readFileSync(robotoWoffPath(WEIGHT_BY_ROLE[role])));
     cachedFiles = { regular: read('regular'), medium: read('medium'), bold: read('bold') };
   }
   return cachedFiles;

@@ -2,7 +2,12 @@ import { pdfPageCount, pdfPageTexts, savePdfArtifact } from './pdf-inspection';
 import { renderSectionsToPdf } from './render-sections';
 import { drawTable } from './table';
 
-const options = { metadata: { title: 'Table', author: 'test', subject: 'table' }, furniture: { headerLeft: 'Lab', headerRight: 'T-1', footerLeft: 'T-1' } };
+const options = {
+  metadata: { title: 'Table', author: 'test', subject: 'table' },
+  furniture: { headerLeft: 'Lab', headerRight: 'T-1', footerLeft: 'T-1' },
+};
+
+const LONG_TEXT = 'A long description that has to wrap onto a second line inside its narrow column';
 
 describe('drawTable', () => {
   jest.setTimeout(20000);
@@ -10,7 +15,7 @@ describe('drawTable', () => {
   it('breaks 120 rows across pages, repeats the header on each page and never splits or loses a row', async () => {
     const rows = Array.from({ length: 120 }, (_, i) => [
       `Row ${String(i + 1).padStart(3, '0')}`,
-      i % 7 === 0 ? 'A long description that has to wrap onto a second line inside its narrow column' : 'Short',
+      i % 7 === 0 ? LONG_TEXT : 'Short',
       (i * 1.25).toFixed(2),
     ]);
     let pagesTouched = 0;
@@ -58,7 +63,17 @@ describe('drawTable', () => {
 
   it('rejects a row whose cell count differs from the columns', async () => {
     await expect(
-      renderSectionsToPdf({}, [{ id: 't', render: (ctx) => drawTable(ctx, { columns: [{ header: 'A', widthWeight: 1 }], rows: [['1', '2']] }) }], options),
+      renderSectionsToPdf(
+        {},
+        [
+          {
+            id: 't',
+            render: (ctx) =>
+              drawTable(ctx, { columns: [{ header: 'A', widthWeight: 1 }], rows: [['1', '2']] }),
+          },
+        ],
+        options,
+      ),
     ).rejects.toThrow(/drawTable: a row has 2 cells for 1 columns/);
   });
 });

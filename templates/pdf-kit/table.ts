@@ -60,7 +60,8 @@ export function drawTable(ctx: RenderContext, spec: TableSpec): number {
 
   const layoutRow = (cells: readonly string[], styleOf: (col: number) => TableCellStyle) => {
     if (cells.length !== widths.length) {
-      throw new RangeError(`drawTable: a row has ${cells.length} cells for ${widths.length} columns`);
+      const counts = `${cells.length} cells for ${widths.length} columns`;
+      throw new RangeError(`drawTable: a row has ${counts}`);
     }
     let heightPt = 0;
     const prepared = cells.map((raw, col) => {
@@ -70,20 +71,24 @@ export function drawTable(ctx: RenderContext, spec: TableSpec): number {
       use(role, color ?? theme.colors.text);
       const textWidth = doc.widthOfString(text);
       const singleLine = !text.includes('\n') && textWidth <= inner;
-      const h = singleLine ? lineHeightPt(role) : doc.heightOfString(text, { width: inner, lineGap: LINE_GAP_PT });
+      const h = singleLine
+        ? lineHeightPt(role)
+        : doc.heightOfString(text, { width: inner, lineGap: LINE_GAP_PT });
       heightPt = Math.max(heightPt, h);
       return { text, role, inner, textWidth, singleLine };
     });
     return { prepared, heightPt: heightPt + 2 * PAD_Y_PT };
   };
 
-  const drawRow = (row: ReturnType<typeof layoutRow>, top: number, styleOf: (col: number) => TableCellStyle) => {
+  type LaidOutRow = ReturnType<typeof layoutRow>;
+  const drawRow = (row: LaidOutRow, top: number, styleOf: (col: number) => TableCellStyle) => {
     row.prepared.forEach((cell, col) => {
       use(cell.role, styleOf(col).color ?? theme.colors.text);
       const align = spec.columns[col].align ?? 'left';
       const x = lefts[col] + PAD_X_PT;
       if (cell.singleLine) {
-        const shift = align === 'right' ? cell.inner - cell.textWidth : align === 'center' ? (cell.inner - cell.textWidth) / 2 : 0;
+        const free = cell.inner - cell.textWidth;
+        const shift = align === 'right' ? free : align === 'center' ? free / 2 : 0;
         doc.text(cell.text, x + shift, top + PAD_Y_PT, { lineBreak: false });
       } else {
         doc.text(cell.text, x, top + PAD_Y_PT, { width: cell.inner, align, lineGap: LINE_GAP_PT });

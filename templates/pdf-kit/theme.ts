@@ -27,7 +27,14 @@ export interface Theme {
     fail: string;
   };
   /** Font sizes in points. */
-  sizesPt: { title: number; heading: number; subheading: number; body: number; small: number; tiny: number };
+  sizesPt: {
+    title: number;
+    heading: number;
+    subheading: number;
+    body: number;
+    small: number;
+    tiny: number;
+  };
   /** Extra space between lines of body text, in points. */
   lineGapPt: number;
 }

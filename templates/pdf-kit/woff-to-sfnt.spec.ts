@@ -16,13 +16,21 @@ interface FontkitFont {
 const fontkit = require('fontkit') as { create(data: Buffer): FontkitFont };
 
 describe('woffToSfnt', () => {
-  it.each([400, 500, 700])('unwraps Roboto %p to a TrueType font identical in glyphs, metrics and shaping', (weight) => {
+  it.each([
+    400,
+    500,
+    700,
+  ])('unwraps Roboto %p to a TrueType font identical in glyphs, metrics and shaping', (weight) => {
     const woff = fs.readFileSync(robotoWoffPath(weight));
     const sfnt = woffToSfnt(woff);
     expect(sfnt.readUInt32BE(0)).toBe(0x00010000); // TrueType outlines flavor
     const a = fontkit.create(woff);
     const b = fontkit.create(sfnt);
-    expect([b.numGlyphs, b.unitsPerEm, b.postscriptName]).toEqual([a.numGlyphs, a.unitsPerEm, a.postscriptName]);
+    expect([b.numGlyphs, b.unitsPerEm, b.postscriptName]).toEqual([
+      a.numGlyphs,
+      a.unitsPerEm,
+      a.postscriptName,
+    ]);
     expect(b.characterSet).toEqual(a.characterSet);
     for (const cp of a.characterSet) {
       const ga = a.glyphForCodePoint(cp);

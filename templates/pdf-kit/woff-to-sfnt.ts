@@ -18,10 +18,13 @@ const WOFF_SIGNATURE = 0x774f4646; // 'wOFF'
 /**
  * Returns the sfnt bytes. Input that is not WOFF 1.0 (for example WOFF2, signature 'wOF2'),
  * or whose table sizes disagree after inflating, throws a RangeError.
- * @example woffToSfnt(fs.readFileSync('roboto-latin-400-normal.woff')).readUInt32BE(0) // 0x00010000
+ * @example woffToSfnt(fs.readFileSync('roboto-latin-400-normal.woff')).readUInt32BE(0)
+ *   // 0x00010000 (TrueType outlines)
  */
 export function woffToSfnt(woff: Buffer): Buffer {
-  if (woff.length < 44 || woff.readUInt32BE(0) !== WOFF_SIGNATURE) throw new RangeError('woffToSfnt: not a WOFF 1.0 file');
+  if (woff.length < 44 || woff.readUInt32BE(0) !== WOFF_SIGNATURE) {
+    throw new RangeError('woffToSfnt: not a WOFF 1.0 file');
+  }
   const flavor = woff.readUInt32BE(4);
   const numTables = woff.readUInt16BE(12);
   const tables = [];
@@ -34,7 +37,10 @@ export function woffToSfnt(woff: Buffer): Buffer {
     const checksum = woff.readUInt32BE(at + 16);
     const stored = woff.subarray(offset, offset + compLength);
     const data = compLength < origLength ? inflateSync(stored) : stored;
-    if (data.length !== origLength) throw new RangeError(`woffToSfnt: table ${i} inflates to ${data.length} bytes, expected ${origLength}`);
+    if (data.length !== origLength) {
+      const sizes = `${data.length} bytes, expected ${origLength}`;
+      throw new RangeError(`woffToSfnt: table ${i} inflates to ${sizes}`);
+    }
     tables.push({ tag, checksum, data });
   }
   tables.sort((a, b) => a.tag - b.tag);

@@ -18,18 +18,27 @@ export interface RenderReportOptions {
 /**
  * Renders the report and returns the PDF bytes and the page count. Errors name the failing
  * section (see renderSectionsToPdf).
- * @example const { pdf, pageCount } = await renderReportPdf(buildSampleReportDocument()); // pageCount 7
+ * @example const { pdf, pageCount } = await renderReportPdf(buildSampleReportDocument());
+ *   // pageCount 5
  */
-export function renderReportPdf(report: ReportDocument, options: RenderReportOptions = {}): Promise<RenderedPdf> {
+export function renderReportPdf(
+  report: ReportDocument,
+  options: RenderReportOptions = {},
+): Promise<RenderedPdf> {
+  const d = report.device;
   const identification = `Report ${report.reportNumber}, revision ${report.revision}`;
   return renderSectionsToPdf(report, options.sections ?? REPORT_SECTIONS, {
     theme: options.theme,
     metadata: {
       title: `${report.title} (${report.reportNumber})`,
       author: report.lab.name,
-      subject: `${report.device.manufacturer} ${report.device.model}, serial ${report.device.serialNumber}`,
+      subject: `${d.manufacturer} ${d.model}, serial ${d.serialNumber}`,
       keywords: [report.method.ruleSetName, report.device.emissionDesignator].join(', '),
     },
-    furniture: { headerLeft: report.lab.name, headerRight: `Test report ${report.reportNumber}`, footerLeft: identification },
+    furniture: {
+      headerLeft: report.lab.name,
+      headerRight: `Test report ${report.reportNumber}`,
+      footerLeft: identification,
+    },
   });
 }

@@ -10,7 +10,12 @@ import type { PlotSpec } from '../pdf-kit/plot-spec';
 export type { PlotSeries, PlotSpec } from '../pdf-kit/plot-spec';
 
 /** Verdicts of ILAC-G8:09/2019 (non-binary rule), plus "not evaluated" when no rule applied. */
-export type ReportVerdict = 'pass' | 'conditional-pass' | 'conditional-fail' | 'fail' | 'not-evaluated';
+export type ReportVerdict =
+  | 'pass'
+  | 'conditional-pass'
+  | 'conditional-fail'
+  | 'fail'
+  | 'not-evaluated';
 
 export interface ReportResult {
   /** The test, for example "Carrier suppression". Rows with the same name form one test. */
@@ -23,7 +28,7 @@ export interface ReportResult {
   unit: string;
   /** The requirement as printed, with its direction, for example "\u2265 40 dB below PEP". */
   limit: string;
-  /** Distance to the limit in `unit`, positive inside the limit (headroom); null without a limit. */
+  /** Distance to the limit in `unit`, positive inside it (headroom); null without a limit. */
   margin: number | null;
   /** Expanded uncertainty U in `unit` (JCGM 100:2008 6.2.1, U = k u_c). 7.8.3.1 c */
   expandedUncertainty: number | null;
@@ -55,7 +60,14 @@ export interface ReportDocument {
   /** 7.8.2.1 a */
   title: string;
   /** The issuing laboratory; logo is a PNG or JPEG image. 7.8.2.1 b */
-  lab: { name: string; addressLines: string[]; accreditation?: string; email?: string; phone?: string; logoPng?: Uint8Array };
+  lab: {
+    name: string;
+    addressLines: string[];
+    accreditation?: string;
+    email?: string;
+    phone?: string;
+    logoPng?: Uint8Array;
+  };
   /** Where the tests were carried out (the lab's premises or a site). 7.8.2.1 c */
   testSite: string;
   /** 7.8.2.1 e */
@@ -77,7 +89,11 @@ export interface ReportDocument {
   /** Receipt (h), testing (i) and issue (j) dates, ISO 8601. */
   dates: { received: string; testedFrom: string; testedTo: string; issued: string };
   /** The method: the rule set with its version and each referenced document. 7.8.2.1 f */
-  method: { ruleSetName: string; ruleSetVersion: string; references: { document: string; clause?: string; edition: string }[] };
+  method: {
+    ruleSetName: string;
+    ruleSetVersion: string;
+    references: { document: string; clause?: string; edition: string }[];
+  };
   /** Sampling plan, when the lab sampled; defaults to a "not applicable" statement. 7.8.2.1 k */
   sampling?: string;
   /** The decision rule applied, as one or two sentences. 7.8.6.2 */
@@ -88,7 +104,7 @@ export interface ReportDocument {
   equipment: { name: string; model: string; serialNumber: string; calibrationDue: string }[];
   /** 7.8.2.1 m */
   results: ReportResult[];
-  /** Additions to, deviations from and exclusions from the method; empty prints "None". 7.8.2.1 n */
+  /** Additions to, deviations from, exclusions from the method; [] prints "None". 7.8.2.1 n */
   deviations: string[];
   testedBy: ReportPerson;
   /** Who authorized the report, and when (ISO 8601 timestamp). 7.8.2.1 o */

@@ -17,8 +17,8 @@ function seededRandom(seed: number): () => number {
 
 /**
  * Stepped mask of 47 CFR 80.211 for an authorized bandwidth of 3.0 kHz, in dB relative to mean
- * power versus offset from the assigned frequency: no limit to 1.5 kHz, -28 dB to 4.5 kHz, -35 dB to
- * 7.5 kHz, then -(43 + 10 log10(P/W)) dB.
+ * power versus offset from the assigned frequency: no limit to 1.5 kHz, -28 dB to 4.5 kHz,
+ * -35 dB to 7.5 kHz, then -(43 + 10 log10(P/W)) dB.
  */
 function maskLevelDb(offsetHz: number, pepW: number): number {
   const a = Math.abs(offsetHz);
@@ -31,8 +31,14 @@ function maskLevelDb(offsetHz: number, pepW: number): number {
  * can quote them). Throws a RangeError below 10 points.
  * @example buildSampleMaskPlot(1000, 150, 1).series[0].x.length // 1000
  */
-export function buildSampleMaskPlot(points: number, pepW: number, seed: number): PlotSpec & { leastMarginDb: number; levelAtLeastMarginDb: number } {
-  if (!(points >= 10)) throw new RangeError(`buildSampleMaskPlot: need at least 10 points, got ${points}`);
+export function buildSampleMaskPlot(
+  points: number,
+  pepW: number,
+  seed: number,
+): PlotSpec & { leastMarginDb: number; levelAtLeastMarginDb: number } {
+  if (!(points >= 10)) {
+    throw new RangeError(`buildSampleMaskPlot: need at least 10 points, got ${points}`);
+  }
   const random = seededRandom(seed);
   const x = new Float64Array(points);
   const y = new Float64Array(points);
@@ -45,12 +51,16 @@ export function buildSampleMaskPlot(points: number, pepW: number, seed: number):
     const levelDb = skirtDb + (random() - 0.5) * (outside > 0 ? 6 : 1.5);
     x[i] = offsetHz;
     y[i] = levelDb;
-    // The mask starts beyond 50 % of the authorized bandwidth (1.5 kHz); inside it there is no limit.
+    // The mask starts beyond 50 % of the authorized bandwidth (1.5 kHz); no limit inside it.
     const marginDb = maskLevelDb(offsetHz, pepW) - levelDb;
-    if (Math.abs(offsetHz) > 1500 && marginDb < worst.marginDb) worst = { x: offsetHz, y: levelDb, marginDb };
+    if (Math.abs(offsetHz) > 1500 && marginDb < worst.marginDb) {
+      worst = { x: offsetHz, y: levelDb, marginDb };
+    }
   }
   const edge = 43 + 10 * Math.log10(pepW);
-  const limitX = [-12000, -7500, -7500, -4500, -4500, -1500, 0, 1500, 4500, 4500, 7500, 7500, 12000];
+  const limitX = [
+    -12000, -7500, -7500, -4500, -4500, -1500, 0, 1500, 4500, 4500, 7500, 7500, 12000,
+  ];
   const limitY = [-edge, -edge, -35, -35, -28, -28, Number.NaN, -28, -28, -35, -35, -edge, -edge];
   return {
     title: 'Emission mask, 2182 kHz, 150 W PEP',
@@ -60,7 +70,11 @@ export function buildSampleMaskPlot(points: number, pepW: number, seed: number):
       { name: 'Measured spectrum (RMS, 300 Hz RBW)', x, y, role: 'trace' },
       { name: '47 CFR 80.211 mask (AB 3.0 kHz)', x: limitX, y: limitY, role: 'limit' },
     ],
-    marker: { x: worst.x, y: worst.y, label: `Least margin ${formatNumber(worst.marginDb, 1)} dB at ${formatNumber(worst.x, 0)} Hz` },
+    marker: {
+      x: worst.x,
+      y: worst.y,
+      label: `Least margin ${formatNumber(worst.marginDb, 1)} dB at ${formatNumber(worst.x, 0)} Hz`,
+    },
     leastMarginDb: worst.marginDb,
     levelAtLeastMarginDb: worst.y,
   };
@@ -83,7 +97,14 @@ export function buildSampleImdPlot(seed: number): PlotSpec {
     title: 'Two-tone intermodulation, 2182 kHz, tones 400 Hz + 1800 Hz',
     xLabel: 'Audio-equivalent frequency (Hz)',
     yLabel: 'Level relative to PEP (dB)',
-    series: [{ name: 'Tones and products', x: order.map((i) => x[i]), y: order.map((i) => y[i]), role: 'products' }],
+    series: [
+      {
+        name: 'Tones and products',
+        x: order.map((i) => x[i]),
+        y: order.map((i) => y[i]),
+        role: 'products',
+      },
+    ],
     marker: { x: x[2], y: y[2], label: 'IM3 (lower)' },
   };
 }

@@ -38,9 +38,15 @@ export function buildSampleReportDocument(overrides: Partial<ReportDocument> = {
       emissionDesignator: '2K70J3E',
       frequencyRange: '1.6 MHz to 27.5 MHz',
       modes: ['J3E', 'H3E'],
-      condition: 'Received in good condition, no visible damage; tested as supplied with the maker\u2019s 13.8 V supply lead.',
+      condition:
+        'Received in good condition, no visible damage; tested as supplied with the maker\u2019s 13.8 V supply lead.',
     },
-    dates: { received: '2025-03-03', testedFrom: '2025-03-04', testedTo: '2025-03-06', issued: '2025-03-10' },
+    dates: {
+      received: '2025-03-03',
+      testedFrom: '2025-03-04',
+      testedTo: '2025-03-06',
+      issued: '2025-03-10',
+    },
     method: {
       ruleSetName: 'Maritime HF SSB radiotelephone (47 CFR Part 80)',
       ruleSetVersion: '2024.2',
@@ -54,7 +60,8 @@ export function buildSampleReportDocument(overrides: Partial<ReportDocument> = {
       ],
     },
     decisionRule:
-      'Non-binary decision rule with a guard band equal to the expanded uncertainty U (ILAC-G8:09/2019), agreed with the client before testing.',
+      'Non-binary decision rule with a guard band equal to the expanded uncertainty U ' +
+      '(ILAC-G8:09/2019), agreed with the client before testing.',
     conditions: [
       { label: 'Ambient temperature', value: '22.5 \u00b0C \u00b1 1.0 \u00b0C' },
       { label: 'Relative humidity', value: '41 % \u00b1 5 %' },
@@ -62,17 +69,51 @@ export function buildSampleReportDocument(overrides: Partial<ReportDocument> = {
       { label: 'Load', value: '50 \u03a9 dummy load through a 30 dB attenuator' },
     ],
     equipment: [
-      { name: 'Spectrum analyser', model: 'Lab asset KRT-SA-01', serialNumber: 'SA01-11873', calibrationDue: '2025-11-30' },
-      { name: 'RF power meter with sensor', model: 'Lab asset KRT-PM-02', serialNumber: 'PM02-40551', calibrationDue: '2025-09-15' },
-      { name: 'Frequency counter, GNSS-disciplined', model: 'Lab asset KRT-FC-01', serialNumber: 'FC01-2290', calibrationDue: '2026-01-31' },
-      { name: 'Two-tone audio generator', model: 'Lab asset KRT-AG-03', serialNumber: 'AG03-7714', calibrationDue: '2025-08-01' },
-      { name: 'Dummy load, 1.5 kW', model: 'Lab asset KRT-DL-01', serialNumber: 'DL01-0192', calibrationDue: '2025-12-31' },
-      { name: 'Attenuator, 30 dB, 500 W', model: 'Lab asset KRT-AT-04', serialNumber: 'AT04-3318', calibrationDue: '2025-12-31' },
+      {
+        name: 'Spectrum analyser',
+        model: 'Lab asset KRT-SA-01',
+        serialNumber: 'SA01-11873',
+        calibrationDue: '2025-11-30',
+      },
+      {
+        name: 'RF power meter with sensor',
+        model: 'Lab asset KRT-PM-02',
+        serialNumber: 'PM02-40551',
+        calibrationDue: '2025-09-15',
+      },
+      {
+        name: 'Frequency counter, GNSS-disciplined',
+        model: 'Lab asset KRT-FC-01',
+        serialNumber: 'FC01-2290',
+        calibrationDue: '2026-01-31',
+      },
+      {
+        name: 'Two-tone audio generator',
+        model: 'Lab asset KRT-AG-03',
+        serialNumber: 'AG03-7714',
+        calibrationDue: '2025-08-01',
+      },
+      {
+        name: 'Dummy load, 1.5 kW',
+        model: 'Lab asset KRT-DL-01',
+        serialNumber: 'DL01-0192',
+        calibrationDue: '2025-12-31',
+      },
+      {
+        name: 'Attenuator, 30 dB, 500 W',
+        model: 'Lab asset KRT-AT-04',
+        serialNumber: 'AT04-3318',
+        calibrationDue: '2025-12-31',
+      },
     ],
     results: buildSampleResults(),
     deviations: [],
     testedBy: { name: 'Tomas Leverett', role: 'Test engineer' },
-    authorizedBy: { name: 'Dr Ilse Marrow', role: 'Technical reviewer', authorizedAt: '2025-03-10T14:32:00Z' },
+    authorizedBy: {
+      name: 'Dr Ilse Marrow',
+      role: 'Technical reviewer',
+      authorizedAt: '2025-03-10T14:32:00Z',
+    },
     verificationUrl: 'https://verify.kestrelmoor-rf.example/r/KRT-2025-0142',
     engineVersion: '1.0.0',
     ...overrides,

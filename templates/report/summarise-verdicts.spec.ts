@@ -1,7 +1,12 @@
 import type { ReportResult, ReportVerdict } from './report-document';
 import { overallVerdict, summariseVerdicts, worseVerdict } from './summarise-verdicts';
 
-const row = (testName: string, verdict: ReportVerdict, margin: number | null = null, unit = 'dB'): ReportResult => ({
+const row = (
+  testName: string,
+  verdict: ReportVerdict,
+  margin: number | null = null,
+  unit = 'dB',
+): ReportResult => ({
   testName,
   testPoint: 'p',
   value: null,
@@ -29,9 +34,19 @@ describe('summariseVerdicts', () => {
   });
 
   it('keeps the order of first appearance, counts points and finds the least margin', () => {
-    const s = summariseVerdicts([row('B', 'pass', 3.2), row('A', 'pass', 6), row('B', 'conditional-fail', -0.4), row('B', 'pass', null)]);
+    const s = summariseVerdicts([
+      row('B', 'pass', 3.2),
+      row('A', 'pass', 6),
+      row('B', 'conditional-fail', -0.4),
+      row('B', 'pass', null),
+    ]);
     expect(s.map((t) => t.testName)).toEqual(['B', 'A']);
-    expect(s[0]).toEqual({ testName: 'B', verdict: 'conditional-fail', testPointCount: 3, leastMargin: { value: -0.4, unit: 'dB' } });
+    expect(s[0]).toEqual({
+      testName: 'B',
+      verdict: 'conditional-fail',
+      testPointCount: 3,
+      leastMargin: { value: -0.4, unit: 'dB' },
+    });
     expect(s[1].leastMargin).toEqual({ value: 6, unit: 'dB' });
   });
 
@@ -41,7 +56,13 @@ describe('summariseVerdicts', () => {
   });
 
   it('is symmetric in its pairwise ranking', () => {
-    const all: ReportVerdict[] = ['not-evaluated', 'pass', 'conditional-pass', 'conditional-fail', 'fail'];
+    const all: ReportVerdict[] = [
+      'not-evaluated',
+      'pass',
+      'conditional-pass',
+      'conditional-fail',
+      'fail',
+    ];
     for (const a of all) for (const b of all) expect(worseVerdict(a, b)).toBe(worseVerdict(b, a));
   });
 });

@@ -20,7 +20,9 @@ export const VERDICT_LABELS: Readonly<Record<ReportVerdict, string>> = {
  */
 export function verdictLabel(verdict: ReportVerdict): string {
   const label = VERDICT_LABELS[verdict];
-  if (label === undefined) throw new RangeError(`verdictLabel: unknown verdict "${String(verdict)}"`);
+  if (label === undefined) {
+    throw new RangeError(`verdictLabel: unknown verdict "${String(verdict)}"`);
+  }
   return label;
 }
 

@@ -5,6 +5,8 @@ export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreation
   declare id: CreationOptional<number>;
   declare organizationId: string | null;
   declare userId: string | null;
+  /** The bench-automation key that made the change, when no person did (migration 0002). */
+  declare apiKeyId: CreationOptional<string | null>;
   declare action: string;
   declare entity: string;
   declare entityId: string | null;
@@ -18,6 +20,7 @@ export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreation
         id: { type: DataTypes.BIGINT, primaryKey: true, autoIncrement: true },
         organizationId: { type: DataTypes.UUID },
         userId: { type: DataTypes.UUID },
+        apiKeyId: { type: DataTypes.UUID },
         action: { type: DataTypes.TEXT, allowNull: false },
         entity: { type: DataTypes.TEXT, allowNull: false },
         entityId: { type: DataTypes.TEXT },

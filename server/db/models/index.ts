@@ -17,8 +17,13 @@ import { ReportStatusChange } from './report-status-change';
 import { AuditEntry } from './audit-entry';
 import { SigningIdentity } from './signing-identity';
 import { RunInstrument } from './run-instrument';
+import { Invitation } from './invitation';
+import { ApiKey } from './api-key';
+import { AuditorGrant } from './auditor-grant';
+import { PasswordReset } from './password-reset';
+import { RunComment } from './run-comment';
 
-export { Organization, User, Membership, RefreshToken, Client, Device, Instrument, RuleSet, TestPlan, TestCase, TestRun, Reading, Result, Report, ReportStatusChange, AuditEntry, SigningIdentity, RunInstrument };
+export { Organization, User, Membership, RefreshToken, Client, Device, Instrument, RuleSet, TestPlan, TestCase, TestRun, Reading, Result, Report, ReportStatusChange, AuditEntry, SigningIdentity, RunInstrument, Invitation, ApiKey, AuditorGrant, PasswordReset, RunComment };
 
 /** Initialise every model on one Sequelize instance (call once at start-up). */
 export function initModels(sequelize: Sequelize): void {
@@ -40,4 +45,9 @@ export function initModels(sequelize: Sequelize): void {
   AuditEntry.initModel(sequelize);
   SigningIdentity.initModel(sequelize);
   RunInstrument.initModel(sequelize);
+  Invitation.initModel(sequelize);
+  ApiKey.initModel(sequelize);
+  AuditorGrant.initModel(sequelize);
+  PasswordReset.initModel(sequelize);
+  RunComment.initModel(sequelize);
 }

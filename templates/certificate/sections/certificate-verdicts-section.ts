@@ -2,15 +2,15 @@
  * Printed as the verdict per test with the least margin, then the overall verdict in words and
  * the decision rule it rests on (ISO/IEC 17025:2017 7.8.6).
  */
-import { defaultDecimals, formatNumber } from '../../pdf-kit/format-number';
 import { drawTable } from '../../pdf-kit/table';
-import { differenceUnit } from '../../report/result-row';
+import { formatLeastMargin } from '../../report/summarise-verdicts';
 import { verdictColor, verdictLabel } from '../../report/verdict-label';
 import type { CertificateSection } from '../certificate-section';
 
 export const certificateVerdictsSection: CertificateSection = {
   id: 'verdicts',
   render(ctx, cert) {
+    const { theme } = ctx;
     ctx.subheading('Results');
     drawTable(ctx, {
       columns: [
@@ -22,11 +22,14 @@ export const certificateVerdictsSection: CertificateSection = {
       rows: cert.tests.map((t) => [
         t.testName,
         String(t.testPointCount),
-        t.leastMargin ? `${formatNumber(t.leastMargin.value, defaultDecimals(t.leastMargin.value), { signed: true })} ${differenceUnit(t.leastMargin.unit)}` : '\u2014',
+        formatLeastMargin(t.leastMargin),
         verdictLabel(t.verdict),
       ]),
-      cellStyle: (row, col) => (col === 3 ? { font: 'medium', color: verdictColor(cert.tests[row].verdict, ctx.theme) } : undefined),
-      sizePt: ctx.theme.sizesPt.body - 0.5,
+      cellStyle: (row, col) =>
+        col === 3
+          ? { font: 'medium', color: verdictColor(cert.tests[row].verdict, theme) }
+          : undefined,
+      sizePt: theme.sizesPt.body - 0.5,
     });
     ctx.ensureSpace(60);
     const y = ctx.y;
@@ -34,15 +37,16 @@ export const certificateVerdictsSection: CertificateSection = {
     ctx.text(verdictLabel(cert.overallVerdict), {
       font: 'bold',
       sizePt: 12,
-      color: verdictColor(cert.overallVerdict, ctx.theme),
+      color: verdictColor(cert.overallVerdict, theme),
       xPt: ctx.frame.leftPt + 100,
       yPt: y,
     });
     ctx.gap(6);
-    ctx.paragraph(`Decision rule: ${cert.decisionRule}`, { sizePt: ctx.theme.sizesPt.small, color: ctx.theme.colors.muted });
-    ctx.paragraph('This certificate relates only to the item tested and does not imply approval by any regulator.', {
-      sizePt: ctx.theme.sizesPt.small,
-      color: ctx.theme.colors.muted,
-    });
+    const note = { sizePt: theme.sizesPt.small, color: theme.colors.muted };
+    ctx.paragraph(`Decision rule: ${cert.decisionRule}`, note);
+    ctx.paragraph(
+      'This certificate relates only to the item tested and does not imply approval by any regulator.',
+      note,
+    );
   },
 };

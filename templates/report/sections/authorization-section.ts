@@ -13,8 +13,15 @@ export function formatTimestampUtc(iso: string): string {
   return match ? `${match[1]} ${match[2]} UTC` : iso;
 }
 
-function personBlock(ctx: RenderContext, caption: string, person: ReportPerson, xPt: number, yPt: number, widthPt: number): void {
-  ctx.text(caption, { font: 'medium', color: ctx.theme.colors.muted, sizePt: ctx.theme.sizesPt.small, xPt, yPt, widthPt });
+function personBlock(
+  ctx: RenderContext,
+  caption: string,
+  person: ReportPerson,
+  box: { xPt: number; yPt: number; widthPt: number },
+): void {
+  const { xPt, widthPt } = box;
+  const { colors, sizesPt } = ctx.theme;
+  ctx.text(caption, { font: 'medium', color: colors.muted, sizePt: sizesPt.small, ...box });
   ctx.text(person.name, { font: 'medium', xPt, widthPt });
   ctx.text(person.role, { xPt, widthPt });
 }
@@ -28,11 +35,15 @@ export const authorizationSection: ReportSection = {
     const { frame, doc, theme } = ctx;
     const half = frame.widthPt / 2;
     const top = ctx.y;
-    personBlock(ctx, 'Tested by', report.testedBy, frame.leftPt, top, half - 12);
-    personBlock(ctx, 'Authorized by', report.authorizedBy, frame.leftPt + half, top, half);
-    ctx.text(`Authorized on ${formatTimestampUtc(report.authorizedBy.authorizedAt)}`, { xPt: frame.leftPt + half, widthPt: half });
+    const right = { xPt: frame.leftPt + half, yPt: top, widthPt: half };
+    const left = { xPt: frame.leftPt, yPt: top, widthPt: half - 12 };
+    personBlock(ctx, 'Tested by', report.testedBy, left);
+    personBlock(ctx, 'Authorized by', report.authorizedBy, right);
+    const authorizedAt = formatTimestampUtc(report.authorizedBy.authorizedAt);
+    ctx.text(`Authorized on ${authorizedAt}`, { xPt: right.xPt, widthPt: half });
     const lineY = ctx.y + 34;
-    doc.moveTo(frame.leftPt + half, lineY).lineTo(frame.rightPt, lineY).lineWidth(0.6).strokeColor(theme.colors.text).stroke();
+    doc.moveTo(right.xPt, lineY).lineTo(frame.rightPt, lineY);
+    doc.lineWidth(0.6).strokeColor(theme.colors.text).stroke();
     ctx.text('Signature (electronic signature embedded in this PDF file)', {
       sizePt: theme.sizesPt.small,
       color: theme.colors.muted,

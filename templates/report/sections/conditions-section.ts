@@ -1,4 +1,4 @@
-/** Printed as "Test conditions": environment and operating conditions (ISO/IEC 17025:2017 7.8.3.1 a). */
+/** Printed as "Test conditions": environment and operation (ISO/IEC 17025:2017 7.8.3.1 a). */
 import { drawKeyValueList } from '../../pdf-kit/key-value-list';
 import type { ReportSection } from '../report-section';
 

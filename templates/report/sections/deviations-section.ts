@@ -1,4 +1,7 @@
-/** Printed as "Deviations": additions to, deviations from and exclusions from the method (7.8.2.1 n). */
+/**
+ * Printed as "Additions, deviations and exclusions" from the method (ISO/IEC 17025:2017
+ * 7.8.2.1 n); an empty list prints "None.".
+ */
 import type { ReportSection } from '../report-section';
 
 export const deviationsSection: ReportSection = {

@@ -15,9 +15,14 @@ export const figuresSection: ReportSection = {
     ctx.heading('Figures');
     withPlots.forEach((result, i) => {
       ctx.ensureSpace(PLOT_HEIGHT_PT + 36);
-      if (result.plot) drawPlot(ctx, result.plot, { xPt: ctx.frame.leftPt, yPt: ctx.y, widthPt: ctx.frame.widthPt, heightPt: PLOT_HEIGHT_PT });
+      const { leftPt, widthPt } = ctx.frame;
+      const box = { xPt: leftPt, yPt: ctx.y, widthPt, heightPt: PLOT_HEIGHT_PT };
+      if (result.plot) drawPlot(ctx, result.plot, box);
       ctx.gap(4);
-      ctx.text(`Figure ${i + 1}. ${result.testName}, ${result.testPoint}.`, { sizePt: ctx.theme.sizesPt.small, color: ctx.theme.colors.muted });
+      ctx.text(`Figure ${i + 1}. ${result.testName}, ${result.testPoint}.`, {
+        sizePt: ctx.theme.sizesPt.small,
+        color: ctx.theme.colors.muted,
+      });
       ctx.gap(18);
     });
   },

@@ -27,10 +27,19 @@ export const itemSection: ReportSection = {
     const dates = report.dates;
     drawKeyValueList(ctx, [
       { label: 'Date of receipt', value: dates.received },
-      { label: 'Dates of testing', value: dates.testedFrom === dates.testedTo ? dates.testedFrom : `${dates.testedFrom} to ${dates.testedTo}` },
+      {
+        label: 'Dates of testing',
+        value:
+          dates.testedFrom === dates.testedTo
+            ? dates.testedFrom
+            : `${dates.testedFrom} to ${dates.testedTo}`,
+      },
       { label: 'Date of issue', value: dates.issued },
       { label: 'Place of testing', value: report.testSite },
-      { label: 'Sampling', value: report.sampling ?? 'Not applicable: the item was submitted by the client.' },
+      {
+        label: 'Sampling',
+        value: report.sampling ?? 'Not applicable: the item was submitted by the client.',
+      },
     ]);
   },
 };

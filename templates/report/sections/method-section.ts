@@ -10,7 +10,10 @@ export const methodSection: ReportSection = {
   render(ctx, report) {
     ctx.heading('Method');
     const m = report.method;
-    ctx.paragraph(`Tests were performed to the rule set "${m.ruleSetName}", version ${m.ruleSetVersion}, which applies the documents below.`);
+    ctx.paragraph(
+      `Tests were performed to the rule set "${m.ruleSetName}", version ${m.ruleSetVersion}, ` +
+        'which applies the documents below.',
+    );
     drawTable(ctx, {
       columns: [
         { header: 'Document', widthWeight: 3 },

@@ -8,14 +8,16 @@ import { RESULT_COLUMNS, resultRowCells } from '../result-row';
 import { verdictColor } from '../verdict-label';
 
 const WEIGHTS = [1.45, 2.05, 1.05, 1.55, 0.95, 1.25, 1.05];
+const NUMERIC_COLUMNS: ReadonlySet<string> = new Set(['Result', 'Margin', 'U (k)']);
 
 export const resultsSection: ReportSection = {
   id: 'results',
   render(ctx, report) {
     ctx.heading('Results');
     ctx.paragraph(
-      'The results relate only to the item tested. Margin is the distance to the limit, positive when the value is inside the limit. ' +
-        'U is the expanded uncertainty with its coverage factor k.',
+      'The results relate only to the item tested. Margin is the distance to the limit, ' +
+        'positive when the value is inside the limit. U is the expanded uncertainty with its ' +
+        'coverage factor k.',
     );
     // Equal notes share one number, so a repeated remark is listed once.
     const notes: string[] = [];
@@ -27,16 +29,25 @@ export const resultsSection: ReportSection = {
     });
     const verdictColumn = RESULT_COLUMNS.length - 1;
     drawTable(ctx, {
-      columns: RESULT_COLUMNS.map((header, i) => ({ header, widthWeight: WEIGHTS[i], align: i >= 2 && i !== 3 && i !== verdictColumn ? 'right' : 'left' })),
+      columns: RESULT_COLUMNS.map((header, i) => ({
+        header,
+        widthWeight: WEIGHTS[i],
+        align: NUMERIC_COLUMNS.has(header) ? 'right' : 'left',
+      })),
       rows,
-      cellStyle: (row, col) => (col === verdictColumn ? { font: 'medium', color: verdictColor(report.results[row].verdict, ctx.theme) } : undefined),
+      cellStyle: (row, col) =>
+        col === verdictColumn
+          ? { font: 'medium', color: verdictColor(report.results[row].verdict, ctx.theme) }
+          : undefined,
     });
     if (report.results.some((r) => r.externalProvider)) {
-      ctx.paragraph('Results marked "external" were provided by an external provider named beside them.', { sizePt: ctx.theme.sizesPt.small });
+      const text = 'Results marked "external" come from the external provider named beside them.';
+      ctx.paragraph(text, { sizePt: ctx.theme.sizesPt.small });
     }
     if (notes.length > 0) {
       ctx.subheading('Notes');
-      notes.forEach((note, i) => ctx.paragraph(`[${i + 1}]  ${note}`, { sizePt: ctx.theme.sizesPt.small }));
+      const style = { sizePt: ctx.theme.sizesPt.small };
+      notes.forEach((note, i) => ctx.paragraph(`[${i + 1}]  ${note}`, style));
     }
   },
 };

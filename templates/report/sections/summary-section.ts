@@ -2,11 +2,9 @@
  * Printed on page 1 after the title block: the overall verdict and the worst verdict per test,
  * so a reader sees the outcome before the detail.
  */
-import { formatNumber, defaultDecimals } from '../../pdf-kit/format-number';
 import { drawTable } from '../../pdf-kit/table';
 import type { ReportSection } from '../report-section';
-import { differenceUnit } from '../result-row';
-import { overallVerdict, summariseVerdicts } from '../summarise-verdicts';
+import { formatLeastMargin, overallVerdict, summariseVerdicts } from '../summarise-verdicts';
 import { verdictColor, verdictLabel } from '../verdict-label';
 
 export const summarySection: ReportSection = {
@@ -17,7 +15,12 @@ export const summarySection: ReportSection = {
     ctx.ensureSpace(40);
     const y = ctx.y;
     ctx.text('Overall verdict:', { font: 'medium', yPt: y });
-    ctx.text(verdictLabel(overall), { font: 'bold', color: verdictColor(overall, ctx.theme), xPt: ctx.frame.leftPt + 82, yPt: y });
+    ctx.text(verdictLabel(overall), {
+      font: 'bold',
+      color: verdictColor(overall, ctx.theme),
+      xPt: ctx.frame.leftPt + 82,
+      yPt: y,
+    });
     ctx.gap(6);
     const summaries = summariseVerdicts(report.results);
     drawTable(ctx, {
@@ -30,10 +33,13 @@ export const summarySection: ReportSection = {
       rows: summaries.map((s) => [
         s.testName,
         String(s.testPointCount),
-        s.leastMargin ? `${formatNumber(s.leastMargin.value, defaultDecimals(s.leastMargin.value), { signed: true })} ${differenceUnit(s.leastMargin.unit)}` : '\u2014',
+        formatLeastMargin(s.leastMargin),
         verdictLabel(s.verdict),
       ]),
-      cellStyle: (row, col) => (col === 3 ? { font: 'medium', color: verdictColor(summaries[row].verdict, ctx.theme) } : undefined),
+      cellStyle: (row, col) =>
+        col === 3
+          ? { font: 'medium', color: verdictColor(summaries[row].verdict, ctx.theme) }
+          : undefined,
     });
   },
 };

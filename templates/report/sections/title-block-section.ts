@@ -16,16 +16,20 @@ export const titleBlockSection: ReportSection = {
       doc.image(Buffer.from(report.lab.logoPng), frame.leftPt, top, { fit: [110, 48] });
       textLeft += 122;
     }
-    ctx.text(report.lab.name, { font: 'medium', sizePt: 13, color: theme.colors.accent, xPt: textLeft, yPt: top });
-    const contact = [...report.lab.addressLines, [report.lab.phone, report.lab.email].filter(Boolean).join('  \u2022  ')];
-    if (report.lab.accreditation) contact.push(report.lab.accreditation);
-    ctx.text(contact.filter((line) => line !== '').join('\n'), { sizePt: theme.sizesPt.small, color: theme.colors.muted, xPt: textLeft });
+    const lab = report.lab;
+    const accent = theme.colors.accent;
+    ctx.text(lab.name, { font: 'medium', sizePt: 13, color: accent, xPt: textLeft, yPt: top });
+    const reach = [lab.phone, lab.email].filter(Boolean).join('  \u2022  ');
+    const contact = [...lab.addressLines, reach, lab.accreditation ?? ''].filter((l) => l !== '');
+    const muted = theme.colors.muted;
+    ctx.text(contact.join('\n'), { sizePt: theme.sizesPt.small, color: muted, xPt: textLeft });
     ctx.y = Math.max(ctx.y, top + 48) + 28;
 
     ctx.text(report.title, { font: 'medium', sizePt: theme.sizesPt.title });
     ctx.gap(4);
     const d = report.device;
-    ctx.text(`${d.manufacturer} ${d.model}, serial number ${d.serialNumber}`, { sizePt: 11, color: theme.colors.muted });
+    const item = `${d.manufacturer} ${d.model}, serial number ${d.serialNumber}`;
+    ctx.text(item, { sizePt: 11, color: theme.colors.muted });
     ctx.gap(16);
 
     drawKeyValueList(ctx, [
@@ -36,7 +40,10 @@ export const titleBlockSection: ReportSection = {
     ]);
 
     if (report.replaces) {
-      const text = `This report amends and replaces report ${report.replaces.reportNumber}, which is withdrawn. Reason: ${report.replaces.reason}`;
+      const { reportNumber, reason } = report.replaces;
+      const text =
+        `This report amends and replaces report ${reportNumber}, which is withdrawn. ` +
+        `Reason: ${reason}`;
       const height = ctx.measure(text, { widthPt: frame.widthPt - 20 }) + 14;
       ctx.ensureSpace(height);
       const y = ctx.y;
@@ -46,7 +53,8 @@ export const titleBlockSection: ReportSection = {
       ctx.y = y + height + 8;
     }
     ctx.text(
-      'The results in this report relate only to the item tested, as received. This report shall not be reproduced except in full without the written approval of the laboratory.',
+      'The results in this report relate only to the item tested, as received. This report ' +
+        'shall not be reproduced except in full without the written approval of the laboratory.',
       { sizePt: theme.sizesPt.small, color: theme.colors.muted },
     );
     ctx.gap(6);

@@ -20,13 +20,22 @@ export const verificationSection: ReportSection = {
     const x = frame.leftPt + QR_SIZE_PT + 6;
     const widthPt = frame.rightPt - x;
     ctx.text('Verify this report', { font: 'medium', xPt: x, yPt: top + 12, widthPt });
-    ctx.text('Scan the code or open the address below to confirm that this report is authentic and has not been replaced.', {
+    const hint =
+      'Scan the code or open the address below to confirm that this report is authentic and ' +
+      'has not been replaced.';
+    ctx.text(hint, {
       sizePt: theme.sizesPt.small,
       color: theme.colors.muted,
       xPt: x,
       widthPt,
     });
-    ctx.text(report.verificationUrl, { font: 'medium', sizePt: theme.sizesPt.small, color: theme.colors.accent, xPt: x, widthPt });
+    ctx.text(report.verificationUrl, {
+      font: 'medium',
+      sizePt: theme.sizesPt.small,
+      color: theme.colors.accent,
+      xPt: x,
+      widthPt,
+    });
     ctx.text(`Results computed by Sidecheck measurement engine ${report.engineVersion}.`, {
       sizePt: theme.sizesPt.small,
       color: theme.colors.muted,
