@@ -6,6 +6,7 @@ import helmet from 'helmet';
 import cookieParser from 'cookie-parser';
 import type { Sequelize } from 'sequelize';
 import { configurePassport, identify } from './auth/passport';
+import { identifyApiKey } from './api-keys/identify-api-key';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { buildRouter } from './http/router';
 import { routeTable, type RouteTableDeps } from './route-table';
@@ -46,6 +47,7 @@ export function buildApp(deps: AppDeps): express.Express {
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
   api.use(cookieParser());
+  api.use(identifyApiKey(deps.sequelize));
   api.use(identify(passport));
   api.use(buildRouter(deps.sequelize, routeTable(deps)));
   api.use(apiNotFound);

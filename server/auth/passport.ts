@@ -34,7 +34,8 @@ export function configurePassport(secret: string): passport.PassportStatic {
 /** Attach `req.principal` when a valid bearer token is present; never rejects by itself. */
 export function identify(instance: passport.PassportStatic): RequestHandler {
   return (req, res, next) => {
-    if (!req.headers.authorization) return next();
+    // "ApiKey <key>" is bench automation, handled by server/api-keys/identify-api-key.ts.
+    if (!req.headers.authorization || /^ApiKey\s/i.test(req.headers.authorization)) return next();
     instance.authenticate('jwt', { session: false }, (error: unknown, user: Principal | false) => {
       if (error) return next(error);
       (req as { principal?: Principal | null }).principal = user || null;

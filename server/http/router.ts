@@ -18,6 +18,7 @@ export function resolveAccess(def: RouteDef, req: AuthedRequest): { organization
   const access = def.access;
   if (access.kind === 'public') return { organizationId: null, roles: [] };
   if (access.kind === 'member-or-api-key' && req.apiKey) return { organizationId: req.apiKey.organizationId, roles: [] };
+  if (req.apiKey && !req.principal) throw forbidden('An API key can only save readings and upload files. Sign in for anything else.');
   const principal = req.principal;
   if (!principal) throw unauthorized(req.tokenRejected ? 'Your sign-in has expired or is not valid. Sign in again.' : 'Sign in to continue.');
   if (access.kind === 'signed-in') return { organizationId: null, roles: [] };

@@ -6,6 +6,7 @@ import { ENGINE_VERSION } from '../../shared/engine-version';
 import type { RuleSetBody } from '../../shared/rules/rule-set';
 import type { Verdict } from '../../shared/uncertainty/decision-rule';
 import { ROLE_LABELS } from '../../shared/access/roles';
+import { assignedInstruments } from '../instruments/run-instruments';
 
 export async function buildReportDocument(input: {
   run: TestRun;
@@ -79,7 +80,7 @@ export async function buildReportDocument(input: {
       { label: 'Ambient temperature', value: '23 °C ± 5 °C' },
       { label: 'Supply voltage', value: 'Nominal, as stated by the manufacturer' },
     ],
-    equipment: [],
+    equipment: (await assignedInstruments(run.id)).map((i) => ({ name: i.name, model: i.model, serialNumber: i.serialNumber, calibrationDue: i.calibrationDue })),
     results: rows,
     deviations: [],
     testedBy: { name: engineer?.displayName ?? 'Unknown', role: ROLE_LABELS.engineer },
