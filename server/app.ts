@@ -45,6 +45,8 @@ export function buildApp(deps: AppDeps): express.Express {
   );
   const passport = configurePassport(deps.tokens.secret);
   const api = express.Router();
+  // The payment webhook's signature covers the exact bytes: keep its body raw (json then skips it).
+  api.use('/billing/webhook', express.raw({ type: () => true, limit: '1mb' }));
   api.use(express.json({ limit: '1mb' }));
   api.use(cookieParser());
   api.use(identifyApiKey(deps.sequelize));

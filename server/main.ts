@@ -6,6 +6,7 @@ import { createMigrator } from './db/migrate';
 import { buildApp } from './app';
 import { createMailer } from './mail/mailer';
 import { enqueueMail, startMailQueue, startMailWorker } from './mail/mail-queue';
+import { createPaymentClient } from './billing/payment-client';
 
 async function main() {
   const config = loadConfig();
@@ -21,10 +22,19 @@ async function main() {
     tokens: { secret: config.jwtSecret, accessTtlSeconds: config.accessTokenTtlSeconds, refreshTtlSeconds: config.refreshTokenTtlSeconds },
     secureCookies: config.secureCookies,
     clientDistDir: config.clientDistDir,
+    publicUrl: config.publicUrl,
+    mail: { enqueue: (transaction, mail) => enqueueMail(boss, transaction, mail) },
     reports: {
       sequelize,
       publicUrl: config.publicUrl,
       keyEncryptionSecret: config.keyEncryptionSecret,
+      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
+    },
+    billing: {
+      sequelize,
+      payments: createPaymentClient(config.payments),
+      webhookSecret: config.payments.webhookSecret,
+      publicUrl: config.publicUrl,
       enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
     },
   });

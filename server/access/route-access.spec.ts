@@ -20,6 +20,26 @@ const EXPECTED: Record<string, Expect> = {
   'post /auth/sign-out': 'public',
   'post /auth/sign-out-everywhere': 'signed-in',
   'get /me': 'signed-in',
+  'post /auth/sign-up': 'public',
+  'post /auth/password-reset/request': 'public',
+  'post /auth/password-reset/complete': 'public',
+  'get /members': EVERY_MEMBER,
+  'put /members/:userId/roles': ['lab-admin', 'manufacturer-admin'],
+  'delete /members/:userId': ['lab-admin', 'manufacturer-admin'],
+  'post /invitations': ['lab-admin', 'manufacturer-admin'],
+  'get /invitations': ['lab-admin', 'manufacturer-admin'],
+  'delete /invitations/:id': ['lab-admin', 'manufacturer-admin'],
+  'get /invitations/lookup/:token': 'public',
+  'post /invitations/accept': 'public',
+  'post /clients/:id/invitations': ['lab-admin'],
+  'post /api-keys': ['lab-admin'],
+  'get /api-keys': ['lab-admin'],
+  'delete /api-keys/:id': ['lab-admin'],
+  'post /auditor-grants': ['lab-admin'],
+  'get /auditor-grants': ['lab-admin'],
+  'delete /auditor-grants/:id': ['lab-admin'],
+  'get /auditor/reports': 'signed-in',
+  'get /auditor/reports/:id/pdf': 'signed-in',
   'get /clients': LAB_ALL,
   'get /clients/:id': LAB_ALL,
   'post /clients': ['lab-admin', 'engineer'],
@@ -45,6 +65,11 @@ const EXPECTED: Record<string, Expect> = {
   'post /runs': ['lab-admin', 'engineer'],
   'get /runs/:id': LAB_ALL,
   'put /runs/:id/cases/:caseId/reading': ['lab-admin', 'engineer'],
+  'post /runs/:id/cases/:caseId/uploads': ['lab-admin', 'engineer'],
+  'get /runs/:id/uploads': LAB_ALL,
+  'get /uploads/:id': LAB_ALL,
+  'get /uploads/:id/file': LAB_ALL,
+  'post /precheck': ['manufacturer-admin', 'manufacturer-viewer'],
   'post /runs/:id/submit': ['lab-admin', 'engineer'],
   'post /runs/:id/return': ['lab-admin', 'reviewer'],
   'post /runs/:id/approve': ['lab-admin', 'reviewer'],
@@ -56,7 +81,20 @@ const EXPECTED: Record<string, Expect> = {
   'get /reports': EVERY_MEMBER,
   'get /reports/:id': EVERY_MEMBER,
   'get /reports/:id/pdf': EVERY_MEMBER,
+  'get /reports/:id/certificate': EVERY_MEMBER,
   'get /verify/:token': 'public',
+  'get /billing/price-list': ['lab-admin', 'billing'],
+  'put /billing/price-list': ['lab-admin', 'billing'],
+  'post /billing/adjustments': ['lab-admin', 'billing'],
+  'get /billing/sales': ['lab-admin', 'billing'],
+  'get /billing/offers': ['manufacturer-admin', 'manufacturer-viewer'],
+  'get /billing/balance': ['manufacturer-admin', 'manufacturer-viewer'],
+  'post /billing/checkout': ['manufacturer-admin'],
+  'post /billing/webhook': 'public',
+  'get /billing/purchases': ['lab-admin', 'billing', 'manufacturer-admin', 'manufacturer-viewer'],
+  'get /billing/purchases/:id': ['lab-admin', 'billing', 'manufacturer-admin', 'manufacturer-viewer'],
+  'get /billing/purchases/:id/receipt': ['lab-admin', 'billing', 'manufacturer-admin', 'manufacturer-viewer'],
+  'get /billing/ledger': ['lab-admin', 'billing', 'manufacturer-admin', 'manufacturer-viewer'],
   'get /openapi.json': 'public',
 };
 
@@ -64,6 +102,9 @@ let t: TestApp;
 let s: Awaited<ReturnType<typeof buildLabScenario>>;
 let other: Awaited<ReturnType<typeof buildLabScenario>>;
 const tokens = new Map<Role, { token: string; org: string }>();
+let labApiKey: string;
+/** Routes a lab's bench-automation key may call (saving readings, uploading files): by hand, from the product's rules. */
+const API_KEY_ROUTES = new Set(['put /runs/:id/cases/:caseId/reading', 'post /runs/:id/cases/:caseId/uploads']);
 
 beforeAll(async () => {
   t = await startTestApp();
@@ -78,11 +119,13 @@ beforeAll(async () => {
     ['manufacturer-viewer', s.makerViewer, s.maker.id],
   ];
   for (const [role, person, org] of people) tokens.set(role, { token: (await signIn(t.app, person.email)).token, org });
+  const key = await request(t.app).post('/api/api-keys').set('Authorization', `Bearer ${tokens.get('lab-admin')!.token}`).set('X-Organization-Id', s.lab.id).send({ name: 'Matrix bench' });
+  labApiKey = key.body.key;
 }, 60_000);
 afterAll(() => t?.close());
 
 const routes = () =>
-  routeTable({ sequelize: {} as never, tokens: { secret: 'x', accessTtlSeconds: 1, refreshTtlSeconds: 1 }, secureCookies: false, reports: {} as never }).map((r) => `${r.method} ${r.path}`);
+  routeTable({ sequelize: {} as never, tokens: { secret: 'x', accessTtlSeconds: 1, refreshTtlSeconds: 1 }, secureCookies: false, reports: {} as never, mail: {} as never, publicUrl: '', billing: {} as never }).map((r) => `${r.method} ${r.path}`);
 
 function fill(path: string): string {
   return path.replace(':caseId', s.cases[0].id).replace(':token', 'no-such-token-000').replace(':id', s.device.id);
@@ -126,4 +169,11 @@ describe.each(Object.entries(EXPECTED))('%s', (key, expected) => {
       expect(res.status).toBe(404);
     });
   }
+  test(API_KEY_ROUTES.has(key) ? 'admits the lab’s API key' : 'refuses an API key (401/403)', async () => {
+    const [method, path] = key.split(' ');
+    const r = (request(t.app) as unknown as Record<string, (u: string) => request.Test>)[method](`/api${fill(path)}`).set('Authorization', `ApiKey ${labApiKey}`);
+    const res = method === 'get' ? await r : await r.send({});
+    if (API_KEY_ROUTES.has(key)) expect([401, 403]).not.toContain(res.status);
+    else expect([401, 403]).toContain(res.status);
+  });
 });

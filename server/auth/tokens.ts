@@ -35,6 +35,8 @@ export async function loadPrincipal(userId: string, transaction?: Transaction): 
       .sort((a, b) => a.name.localeCompare(b.name))
       .map((org) => ({
         organizationId: org.id,
+        // The name lets the client's organization switcher show names instead of ids.
+        organizationName: org.name,
         kind: org.kind,
         roles: memberships.filter((m) => m.organizationId === org.id).map((m) => m.role as Role),
       })),

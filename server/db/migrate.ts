@@ -3,10 +3,13 @@ import type { Sequelize } from 'sequelize';
 import { migration as foundation } from './migrations/0001-foundation';
 import { migration as accounts } from './migrations/0002-accounts';
 import { migration as equipment } from './migrations/0003-equipment';
+import { migration as billing } from './migrations/0004-billing';
+import { migration as uploads } from './migrations/0005-uploads';
 import { migration as comments } from './migrations/0006-comments';
+import { migration as certificates } from './migrations/0007-certificates';
 
 /** Every migration, in order. Add a new file under migrations/ and append it here. */
-const MIGRATIONS = [foundation, accounts, equipment, comments];
+const MIGRATIONS = [foundation, accounts, equipment, billing, uploads, comments, certificates];
 
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({

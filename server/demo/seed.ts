@@ -5,11 +5,13 @@
 import type { Sequelize } from 'sequelize';
 import { Client, Device, Instrument, Membership, Organization, RuleSet, RunInstrument, TestCase, TestPlan, TestRun, User } from '../db/models';
 import { asSystem } from '../tenancy/tenant-transaction';
+import { seedDemoBilling } from '../billing/seed-demo-billing';
 import { hashPassword } from '../auth/password';
 import { SAMPLE_RULE_SETS } from '../../shared/rules/sample-rule-sets';
 import { DEMO_DEVICES, DEMO_LAB, DEMO_MANUFACTURER, DEMO_PASSWORD, DEMO_PEOPLE } from './demo-scenario';
 import { DEMO_RUN_INSTRUMENT_SERIALS, demoInstruments } from './demo-instruments';
 import { todayIso } from '../instruments/calibration-status';
+import { ensureDemoTraceUpload } from './demo-trace-upload';
 
 export async function ensureBuiltInRuleSets(sequelize: Sequelize): Promise<number> {
   return asSystem(sequelize, async (transaction) => {
@@ -26,7 +28,7 @@ export async function ensureBuiltInRuleSets(sequelize: Sequelize): Promise<numbe
 
 export async function seedDemo(sequelize: Sequelize): Promise<{ created: boolean }> {
   await ensureBuiltInRuleSets(sequelize);
-  return asSystem(sequelize, async (transaction) => {
+  const outcome = await asSystem(sequelize, async (transaction) => {
     if (await Organization.findOne({ where: { code: DEMO_LAB.code }, transaction })) return { created: false };
     const lab = await Organization.create({ kind: 'lab', ...DEMO_LAB }, { transaction });
     const maker = await Organization.create({ kind: 'manufacturer', ...DEMO_MANUFACTURER }, { transaction });
@@ -43,6 +45,7 @@ export async function seedDemo(sequelize: Sequelize): Promise<{ created: boolean
       { organizationId: lab.id, clientOrganizationId: maker.id, name: maker.name, addressLines: maker.addressLines, contactName: 'Delphine Okafor', contactEmail: 'delphine.okafor@halyard-radio.example' },
       { transaction },
     );
+    await seedDemoBilling({ labId: lab.id, clientId: client.id, byUserId: people['imogen.varga@kestrelbay.example'].id }, transaction);
     const maritime = (await RuleSet.findOne({ where: { organizationId: null, key: 'us-maritime-hf-ssb' }, transaction }))!;
     const engineer = people['tomasz.ellery@kestrelbay.example'];
     const instruments = [];
@@ -57,6 +60,9 @@ export async function seedDemo(sequelize: Sequelize): Promise<{ created: boolean
       const points = [
         { kind: 'carrier-suppression' as const, label: '2182 kHz, full power', frequencyHz: 2_182_000 },
         { kind: 'carrier-suppression' as const, label: '8291 kHz, full power', frequencyHz: 8_291_000 },
+        // Judged from uploads: a spectrum-analyzer trace, and an I/Q capture of a 1 kHz tone.
+        { kind: 'emission-mask' as const, label: '2182 kHz, two-tone mask (trace)', frequencyHz: 2_182_000 },
+        { kind: 'unwanted-sideband' as const, label: '2182 kHz, 1 kHz tone (I/Q capture)', frequencyHz: 2_182_000 },
       ];
       for (const [position, p] of points.entries()) {
         await TestCase.create({ organizationId: lab.id, planId: plan.id, position: position + 1, kind: p.kind, label: p.label, parameters: { frequencyHz: p.frequencyHz, sideband: 'USB', powerLevel: 'Full rated PEP' } }, { transaction });
@@ -72,4 +78,7 @@ export async function seedDemo(sequelize: Sequelize): Promise<{ created: boolean
     await sequelize.query("INSERT INTO org_counters (organization_id, name, value) VALUES (:org, 'run', :n)", { replacements: { org: lab.id, n: runNumber }, transaction });
     return { created: true };
   });
+  // The run on the bench gets its invented trace upload once the demo records are committed.
+  await ensureDemoTraceUpload(sequelize);
+  return outcome;
 }

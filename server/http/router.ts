@@ -5,6 +5,7 @@ import { inTenant } from '../tenancy/tenant-transaction';
 import { forbidden, notFound, unauthorized } from './problem';
 import { isFileAnswer, type Principal, type RouteContext, type RouteDef } from './route';
 import { validate } from './validation';
+import { Membership } from '../db/models';
 
 export interface ApiKeyPrincipal {
   organizationId: string;
@@ -31,6 +32,20 @@ export function resolveAccess(def: RouteDef, req: AuthedRequest): { organization
   return { organizationId: membership.organizationId, roles: membership.roles };
 }
 
+/**
+ * The token's memberships decide quickly; the database has the last word, so a member removed or
+ * given other roles loses access at once rather than when the access token expires.
+ */
+async function currentAccess(def: RouteDef, req: AuthedRequest, claimed: { organizationId: string | null; roles: Role[] }) {
+  const access = def.access;
+  if ((access.kind !== 'member' && access.kind !== 'member-or-api-key') || !req.principal || !claimed.organizationId) return claimed;
+  const rows = await Membership.findAll({ where: { userId: req.principal.userId, organizationId: claimed.organizationId }, attributes: ['role'] });
+  if (rows.length === 0) throw notFound('The organization');
+  const roles = rows.map((r) => r.role as Role);
+  if (!roles.some((r) => access.roles.includes(r))) throw forbidden('Your role in this organization does not allow this action.');
+  return { organizationId: claimed.organizationId, roles };
+}
+
 function send(res: Response, value: unknown, status: number): void {
   if (isFileAnswer(value)) {
     res
@@ -52,7 +67,7 @@ export function buildRouter(sequelize: Sequelize, routes: RouteDef[]): express.R
   const router = express.Router();
   for (const def of routes) {
     router[def.method](def.path, async (req: AuthedRequest, res: Response) => {
-      const { organizationId, roles } = resolveAccess(def, req);
+      const { organizationId, roles } = await currentAccess(def, req, resolveAccess(def, req));
       const body = def.bodySchema ? validate(def.bodySchema, req.body) : req.body;
       let status = def.method === 'post' ? 201 : 200;
       const context = (transaction: RouteContext['transaction']): RouteContext => ({

@@ -60,6 +60,18 @@ describe('issuing a report', () => {
     expect(sig).toContain('Signature is Valid.');
     expect(sig).toContain('Total document signed');
 
+    // The certificate refers to the report by number and is signed too.
+    const cert = await reviewer('get', `/reports/${issued.body.id}/certificate`).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(cert.status).toBe(200);
+    const certFile = file.replace('report.pdf', 'certificate.pdf');
+    fs.writeFileSync(certFile, cert.body as Buffer);
+    expect(execFileSync('pdftotext', [certFile, '-'], { encoding: 'utf8' })).toContain(issued.body.reportNumber);
+    expect(execFileSync('pdfsig', [certFile], { encoding: 'utf8' })).toContain('Signature is Valid.');
+
     // The manufacturer client sees it, with the same bytes.
     const maker = await as(s.makerAdmin, s.maker.id);
     const list = await maker('get', '/reports');

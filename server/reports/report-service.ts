@@ -13,7 +13,9 @@ import { nextCounter } from '../runs/run-number';
 import { presentRun } from '../runs/run-presenter';
 import { buildReportDocument } from './build-report-document';
 import { activeSigningIdentity } from './signing-identity-store';
-import { renderSignedReport } from '../signing/render-signed-documents';
+import { consumeCreditForReport } from '../billing/consume-credit-for-report';
+import { renderSignedCertificate, renderSignedReport } from '../signing/render-signed-documents';
+import { buildCertificateDocument } from '../../templates/certificate/certificate-document';
 import { reportIssuedEmail } from '../../templates/email/report-issued';
 import type { Verdict } from '../../shared/uncertainty/decision-rule';
 
@@ -44,6 +46,9 @@ export async function issueReport(deps: ReportDeps, ctx: RouteContext, run: Test
     reportNumber = `${lab.code}-${new Date().getUTCFullYear()}-${String(n).padStart(4, '0')}`;
   }
   const revision = previous ? previous.revision + 1 : 1;
+  // One report credit of the client, taken in this transaction before anything can fail (server/billing).
+  const reportId = crypto.randomUUID();
+  await consumeCreditForReport(deps, ctx, { runId: run.id, reportId, revision });
   // The reason given when the run was reopened, from the append-only audit log.
   const reopened = previous ? await AuditEntry.findOne({ where: { entity: 'test-run', entityId: run.id, action: 'run-revise' }, order: [['id', 'DESC']] }) : null;
   const reason = (reopened?.after as { reason?: string } | null)?.reason ?? 'Corrected';
@@ -55,6 +60,7 @@ export async function issueReport(deps: ReportDeps, ctx: RouteContext, run: Test
   const identity = await activeSigningIdentity(run.organizationId, deps.keyEncryptionSecret);
   const signed = await renderSignedReport(built.doc, identity);
   const report = await Report.create({
+    id: reportId,
     organizationId: run.organizationId,
     runId: run.id,
     clientOrganizationId: built.clientOrganizationId,
@@ -79,6 +85,12 @@ export async function issueReport(deps: ReportDeps, ctx: RouteContext, run: Test
     issuedBy: ctx.principal!.userId,
     issuedAt,
   });
+  // The compliance certificate summarises the verdicts and refers to the report by number.
+  const certificate = await renderSignedCertificate(buildCertificateDocument(built.doc), identity);
+  await deps.sequelize.query(
+    'INSERT INTO report_certificates (report_id, organization_id, client_organization_id, sha256, pdf) VALUES (:report, :org, :client, :sha, :pdf)',
+    { replacements: { report: report.id, org: run.organizationId, client: built.clientOrganizationId, sha: certificate.sha256, pdf: certificate.pdf }, transaction: ctx.transaction ?? undefined },
+  );
   if (previous) {
     await ReportStatusChange.create({ organizationId: run.organizationId, reportId: previous.id, status: 'superseded', reason: replaces!.reason, supersededById: report.id, changedBy: ctx.principal!.userId });
   }

@@ -76,6 +76,19 @@ export function reportRoutes(deps: ReportDeps): RouteDef[] {
     }),
     route({
       method: 'get',
+      path: '/reports/:id/certificate',
+      summary: 'Download the signed compliance certificate issued with the report',
+      access: { kind: 'member', roles: READERS },
+      async handler(ctx) {
+        const r = await loadReport(ctx.params.id);
+        const [rows] = await deps.sequelize.query('SELECT pdf FROM report_certificates WHERE report_id = :id', { replacements: { id: r.id }, transaction: ctx.transaction ?? undefined });
+        const row = (rows as { pdf: Buffer }[])[0];
+        if (!row) throw notFound('The certificate');
+        return fileAnswer({ contentType: 'application/pdf', filename: `${r.reportNumber}-rev${r.revision}-certificate.pdf`, body: row.pdf });
+      },
+    }),
+    route({
+      method: 'get',
       path: '/verify/:token',
       summary: 'Public: is this report authentic and current?',
       access: { kind: 'public' },

@@ -3,7 +3,7 @@
  * these; the state table itself lives in shared/runs/run-state.ts so the client shows the same.
  */
 import { Op, type Sequelize } from 'sequelize';
-import { Client, Device, Reading, Result, TestCase, TestPlan, TestRun } from '../db/models';
+import { Client, Device, Reading, Result, TestCase, TestPlan, TestRun, Upload } from '../db/models';
 import { conflict, forbidden, notFound, validationFailed } from '../http/problem';
 import type { RouteContext } from '../http/route';
 import { nextState, type RunAction } from '../../shared/runs/run-state';
@@ -15,6 +15,7 @@ import { nextCounter } from './run-number';
 import { presentResult, presentRun } from './run-presenter';
 import { assignedInstruments, contributionsByBudget, presentRunInstrument, refuseOverdue } from '../instruments/run-instruments';
 import { todayIso } from '../instruments/calibration-status';
+import { presentUpload, presentUploadResult } from '../uploads/upload-presenter';
 
 export async function loadRun(id: string) {
   const run = await TestRun.findByPk(id);
@@ -29,6 +30,7 @@ export async function runDetail(run: TestRun) {
   const cases = await TestCase.findAll({ where: { planId: plan.id }, order: [['position', 'ASC']] });
   const readings = await Reading.findAll({ where: { runId: run.id }, order: [['createdAt', 'DESC']] });
   const results = await Result.findAll({ where: { runId: run.id }, order: [['createdAt', 'DESC']] });
+  const uploads = await Upload.findAll({ where: { runId: run.id }, attributes: { exclude: ['analysis'] }, order: [['createdAt', 'DESC']] });
   const instruments = await assignedInstruments(run.id);
   const today = todayIso();
   return {
@@ -39,7 +41,9 @@ export async function runDetail(run: TestRun) {
     client: { id: client.id, name: client.name, contactName: client.contactName, contactEmail: client.contactEmail },
     testCases: cases.map((c) => {
       const reading = readings.find((r) => r.testCaseId === c.id) ?? null;
-      const result = results.find((r) => r.testCaseId === c.id) ?? null;
+      const result = results.find((r) => r.testCaseId === c.id && r.readingId !== null) ?? null;
+      // The latest result computed from an uploaded trace or capture (server/uploads).
+      const traceResult = results.find((r) => r.testCaseId === c.id && r.uploadId !== null) ?? null;
       return {
         id: c.id,
         position: c.position,
@@ -48,6 +52,8 @@ export async function runDetail(run: TestRun) {
         parameters: c.parameters,
         reading: reading && { id: reading.id, values: reading.values, enteredBy: reading.enteredBy, createdAt: reading.createdAt.toISOString() },
         result: result && result.readingId === reading?.id ? presentResult(result) : null,
+        uploads: uploads.filter((u) => u.testCaseId === c.id).map(presentUpload),
+        traceResult: traceResult && presentUploadResult(traceResult),
       };
     }),
   };
@@ -135,7 +141,7 @@ export async function transition(ctx: RouteContext, run: TestRun, action: RunAct
   const me = ctx.principal!.userId;
   if (action === 'submit') {
     const detail = await runDetail(run);
-    const missing = detail.testCases.filter((c) => !c.result);
+    const missing = detail.testCases.filter((c) => !c.result && !c.traceResult);
     if (missing.length) throw conflict(`Every test case needs a computed result before review; missing: ${missing.map((c) => c.label).join(', ')}.`, { code: 'results-missing' });
     refuseOverdue(await assignedInstruments(run.id), todayIso(), 'Repeat the affected measurements with calibrated equipment before review.');
   }

@@ -22,9 +22,11 @@ import { READING_FIELDS, type ReadingValues } from './reading-fields';
 /** A reading or rule set that cannot be evaluated; the message is for the person at the bench. */
 export class EvaluationError extends Error {}
 
-type Budget = keyof RuleSetBody['uncertainty'];
+/** Which uncertainty budget of the rule set a measured quantity joins. */
+export type Budget = keyof RuleSetBody['uncertainty'];
 
-interface Measured {
+/** A measured quantity with its limit, before uncertainty and the decision rule are applied. */
+export interface Measured {
   value: number;
   unit: string;
   limit: number;
@@ -49,7 +51,8 @@ function requireReadings(readings: ReadingValues, kind: TestKind): void {
   }
 }
 
-function limitOf<K extends keyof RuleSetBody['limits']>(rules: RuleSetBody, key: K, what: string): NonNullable<RuleSetBody['limits'][K]> {
+/** The rule set's limit of one kind, or an EvaluationError naming what is missing. */
+export function limitOf<K extends keyof RuleSetBody['limits']>(rules: RuleSetBody, key: K, what: string): NonNullable<RuleSetBody['limits'][K]> {
   const limit = rules.limits[key];
   if (!limit) throw new EvaluationError(`The rule set has no ${what} limit.`);
   return limit as NonNullable<RuleSetBody['limits'][K]>;
@@ -160,15 +163,27 @@ export function evaluateTestCase(input: {
   instrumentContributions?: UncertaintyContribution[] | Partial<Record<Budget, UncertaintyContribution[]>>;
 }): TestCaseResult {
   requireReadings(input.readings, input.kind);
-  const m = measure(input.kind, input.readings, input.rules);
-  const extra = input.instrumentContributions;
+  return concludeMeasurement(input.kind, measure(input.kind, input.readings, input.rules), input.rules, input.instrumentContributions);
+}
+
+/**
+ * The shared last step for hand readings and imported traces alike: the measured quantity's
+ * budget (rule set plus instruments) combined per GUM with k = 2, then the rule set's ILAC-G8
+ * decision rule. Throws EvaluationError when the rule set has no budget for the quantity.
+ */
+export function concludeMeasurement(
+  kind: TestKind,
+  m: Measured,
+  rules: RuleSetBody,
+  extra?: UncertaintyContribution[] | Partial<Record<Budget, UncertaintyContribution[]>>,
+): TestCaseResult {
   const fromInstruments = Array.isArray(extra) ? extra : (extra?.[m.budget] ?? []);
-  const budget = [...(input.rules.uncertainty[m.budget] ?? []), ...fromInstruments];
+  const budget = [...(rules.uncertainty[m.budget] ?? []), ...fromInstruments];
   if (budget.length === 0) throw new EvaluationError(`The rule set has no uncertainty budget for ${m.unit} readings; add one before evaluating.`);
   const uncertainty = combineUncertainty(budget, { coverageFactor: 2 });
-  const decision = applyDecisionRule({ value: m.value, limit: m.limit, direction: m.direction, expandedUncertainty: uncertainty.expanded, rule: input.rules.decisionRule });
+  const decision = applyDecisionRule({ value: m.value, limit: m.limit, direction: m.direction, expandedUncertainty: uncertainty.expanded, rule: rules.decisionRule });
   return {
-    kind: input.kind,
+    kind,
     value: m.value,
     unit: m.unit,
     limit: m.limit,
@@ -177,7 +192,7 @@ export function evaluateTestCase(input: {
     margin: decision.marginDb,
     uncertainty,
     verdict: decision.verdict,
-    decisionRuleText: describeDecisionRule(input.rules.decisionRule),
+    decisionRuleText: describeDecisionRule(rules.decisionRule),
     detail: m.detail,
   };
 }

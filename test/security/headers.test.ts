@@ -6,8 +6,6 @@
 import request from 'supertest';
 import { startTestApp, type TestApp } from '../support/test-app';
 import { buildOrganization, buildUser, TEST_PASSWORD } from '../support/factories';
-import { buildApp } from '../../server/app';
-import { enqueueMail } from '../../server/mail/mail-queue';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -37,13 +35,8 @@ test('CORS is closed: another origin gets no Access-Control-Allow-Origin, even o
 test('the refresh cookie is HttpOnly, SameSite=Strict, scoped to /api/auth, and Secure when configured', async () => {
   const lab = await buildOrganization(t.sequelize);
   const user = await buildUser(t.sequelize, lab.id, ['engineer']);
-  const secureApp = buildApp({
-    sequelize: t.sequelize,
-    tokens: { secret: 'x'.repeat(32), accessTtlSeconds: 60, refreshTtlSeconds: 600 },
-    secureCookies: true,
-    log: () => undefined,
-    reports: { sequelize: t.sequelize, publicUrl: 'http://127.0.0.1', keyEncryptionSecret: 'k', enqueueMail: (tx, mail) => enqueueMail(t.boss, tx, mail) },
-  } as never);
+  const secure = await startTestApp({ secureCookies: true });
+  const secureApp = secure.app;
   const res = await request(secureApp).post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
   expect(res.status).toBe(200);
   const cookie = String(res.headers['set-cookie']);
@@ -51,6 +44,7 @@ test('the refresh cookie is HttpOnly, SameSite=Strict, scoped to /api/auth, and 
   expect(cookie).toMatch(/Secure/);
   expect(cookie).toMatch(/SameSite=Strict/);
   expect(cookie).toMatch(/Path=\/api\/auth/);
+  await secure.close();
 });
 
 test('passwords and tokens never reach the logs, even when a request fails', async () => {

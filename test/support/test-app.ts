@@ -11,6 +11,15 @@ import { migrateUp } from '../../server/db/migrate';
 import { buildApp } from '../../server/app';
 import { enqueueMail, startMailQueue } from '../../server/mail/mail-queue';
 import { ensureBuiltInRuleSets } from '../../server/demo/seed';
+import type { MailSender } from '../../server/accounts/account-deps';
+import { createPaymentClient } from '../../server/billing/payment-client';
+
+/** Where the billing routes find the payment API (a fakes/payments stand-in); by default nowhere (port 1 refuses). */
+export interface TestPayments {
+  port: number;
+  secretKey: string;
+  webhookSecret: string;
+}
 
 export interface TestApp {
   app: Express;
@@ -28,7 +37,11 @@ export function testDatabaseUrl(): string {
   return url;
 }
 
-export async function startTestApp(options: { accessTtlSeconds?: number } = {}): Promise<TestApp> {
+/**
+ * Options: `mail` replaces the real queue for the people-and-access routes (a test that reads the
+ * e-mails passes a recording sender); without it, their mail goes into pg-boss like all other mail.
+ */
+export async function startTestApp(options: { accessTtlSeconds?: number; mail?: MailSender; payments?: TestPayments; secureCookies?: boolean } = {}): Promise<TestApp> {
   const url = testDatabaseUrl();
   const sequelize = createSequelize(url, { poolMax: 5 });
   initModels(sequelize);
@@ -39,12 +52,24 @@ export async function startTestApp(options: { accessTtlSeconds?: number } = {}):
   const app = buildApp({
     sequelize,
     tokens: { secret: TEST_JWT_SECRET, accessTtlSeconds: options.accessTtlSeconds ?? 600, refreshTtlSeconds: 3600 },
-    secureCookies: false,
+    secureCookies: options.secureCookies ?? false,
     log: (entry) => logs.push(entry),
+    publicUrl: 'http://127.0.0.1:4610',
+    mail: options.mail ?? { enqueue: (transaction, mail) => enqueueMail(boss, transaction, mail) },
     reports: {
       sequelize,
       publicUrl: 'http://127.0.0.1:4610',
       keyEncryptionSecret: 'test-only-key-encryption-secret',
+      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
+    },
+    billing: {
+      sequelize,
+      payments: createPaymentClient(
+        { secretKey: options.payments?.secretKey ?? 'sk_test_nowhere', host: '127.0.0.1', port: options.payments?.port ?? 1, protocol: 'http', webhookSecret: '' },
+        { maxNetworkRetries: 0 },
+      ),
+      webhookSecret: options.payments?.webhookSecret ?? 'whsec_test_only',
+      publicUrl: 'http://127.0.0.1:4610',
       enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
     },
   });

@@ -22,8 +22,14 @@ import { ApiKey } from './api-key';
 import { AuditorGrant } from './auditor-grant';
 import { PasswordReset } from './password-reset';
 import { RunComment } from './run-comment';
+import { Upload } from './upload';
+import { CreditPriceList } from './credit-price-list';
+import { PaymentCustomer } from './payment-customer';
+import { CreditPurchase } from './credit-purchase';
+import { CreditReceipt } from './credit-receipt';
+import { CreditLedgerEntry } from './credit-ledger-entry';
 
-export { Organization, User, Membership, RefreshToken, Client, Device, Instrument, RuleSet, TestPlan, TestCase, TestRun, Reading, Result, Report, ReportStatusChange, AuditEntry, SigningIdentity, RunInstrument, Invitation, ApiKey, AuditorGrant, PasswordReset, RunComment };
+export { Organization, User, Membership, RefreshToken, Client, Device, Instrument, RuleSet, TestPlan, TestCase, TestRun, Reading, Result, Report, ReportStatusChange, AuditEntry, SigningIdentity, RunInstrument, Invitation, ApiKey, AuditorGrant, PasswordReset, RunComment, Upload, CreditPriceList, PaymentCustomer, CreditPurchase, CreditReceipt, CreditLedgerEntry };
 
 /** Initialise every model on one Sequelize instance (call once at start-up). */
 export function initModels(sequelize: Sequelize): void {
@@ -50,4 +56,10 @@ export function initModels(sequelize: Sequelize): void {
   AuditorGrant.initModel(sequelize);
   PasswordReset.initModel(sequelize);
   RunComment.initModel(sequelize);
+  Upload.initModel(sequelize);
+  CreditPriceList.initModel(sequelize);
+  PaymentCustomer.initModel(sequelize);
+  CreditPurchase.initModel(sequelize);
+  CreditReceipt.initModel(sequelize);
+  CreditLedgerEntry.initModel(sequelize);
 }

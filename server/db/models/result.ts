@@ -6,7 +6,9 @@ export class Result extends Model<InferAttributes<Result>, InferCreationAttribut
   declare organizationId: string;
   declare runId: string;
   declare testCaseId: string;
-  declare readingId: string;
+  /** The reading it was computed from, or null when it comes from an upload (migration 0005). */
+  declare readingId: string | null;
+  declare uploadId: CreationOptional<string | null>;
   declare engineVersion: string;
   declare value: number | null;
   declare unit: string;
@@ -25,7 +27,8 @@ export class Result extends Model<InferAttributes<Result>, InferCreationAttribut
         organizationId: { type: DataTypes.UUID, allowNull: false },
         runId: { type: DataTypes.UUID, allowNull: false },
         testCaseId: { type: DataTypes.UUID, allowNull: false },
-        readingId: { type: DataTypes.UUID, allowNull: false },
+        readingId: { type: DataTypes.UUID },
+        uploadId: { type: DataTypes.UUID },
         engineVersion: { type: DataTypes.TEXT, allowNull: false },
         value: { type: DataTypes.DOUBLE },
         unit: { type: DataTypes.TEXT, allowNull: false },

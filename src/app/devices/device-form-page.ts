@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators, type AbstractControl, type ValidationErrors } from '@angular/forms';
 import { Router, RouterLink } from '@angular/router';
 import { MatButtonModule } from '@angular/material/button';
@@ -8,6 +8,7 @@ import { MatSelectModule } from '@angular/material/select';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { DevicesApi, type ClientRow } from './devices-api';
+import type { CreateDeviceBody } from '../../../shared/schemas/records';
 import { problemFieldErrors, problemMessage } from '../session/problem-message';
 import { parseEmissionDesignator } from '../../../shared/bandwidth/emission-designator';
 
@@ -27,10 +28,15 @@ function designator(control: AbstractControl): ValidationErrors | null {
   templateUrl: './device-form-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class DeviceFormPage {
+export class DeviceFormPage implements OnInit {
   private readonly api = inject(DevicesApi);
   private readonly router = inject(Router);
 
+  /** Present when changing a registered device (/devices/:id/edit). */
+  readonly id = input<string>();
+
+  protected readonly editing = computed(() => !!this.id());
+  protected readonly loading = signal(false);
   protected readonly clients = signal<ClientRow[]>([]);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
@@ -61,6 +67,36 @@ export class DeviceFormPage {
     });
   }
 
+  ngOnInit(): void {
+    const id = this.id();
+    if (!id) return;
+    this.loading.set(true);
+    this.api.get(id).subscribe({
+      next: (d) => {
+        this.form.setValue({
+          clientId: d.clientId,
+          manufacturer: d.manufacturer,
+          model: d.model,
+          serialNumber: d.serialNumber,
+          firmware: d.firmware ?? '',
+          ratedPepW: d.ratedPepW,
+          emissionDesignator: d.emissionDesignator,
+          frequencyMinMHz: d.frequencyMinHz / 1e6,
+          frequencyMaxMHz: d.frequencyMaxHz / 1e6,
+          usb: d.modes.includes('USB'),
+          lsb: d.modes.includes('LSB'),
+          receivedOn: d.receivedOn,
+          condition: d.condition ?? '',
+        });
+        this.loading.set(false);
+      },
+      error: (error) => {
+        this.error.set(problemMessage(error));
+        this.loading.set(false);
+      },
+    });
+  }
+
   save(): void {
     const v = this.form.getRawValue();
     const modes = [...(v.usb ? ['USB' as const] : []), ...(v.lsb ? ['LSB' as const] : [])];
@@ -71,28 +107,28 @@ export class DeviceFormPage {
     }
     this.busy.set(true);
     this.error.set(null);
-    this.api
-      .create({
-        clientId: v.clientId,
-        manufacturer: v.manufacturer.trim(),
-        model: v.model.trim(),
-        serialNumber: v.serialNumber.trim(),
-        firmware: v.firmware.trim() || undefined,
-        ratedPepW: Number(v.ratedPepW),
-        emissionDesignator: v.emissionDesignator.toUpperCase(),
-        frequencyMinHz: Math.round(Number(v.frequencyMinMHz) * 1e6),
-        frequencyMaxHz: Math.round(Number(v.frequencyMaxMHz) * 1e6),
-        modes,
-        receivedOn: v.receivedOn,
-        condition: v.condition.trim(),
-      })
-      .subscribe({
-        next: (device) => void this.router.navigate(['/plans/new'], { queryParams: { deviceId: device.id } }),
-        error: (error) => {
-          this.error.set(problemMessage(error));
-          this.fieldErrors.set(problemFieldErrors(error));
-          this.busy.set(false);
-        },
-      });
+    const id = this.id();
+    const body: CreateDeviceBody = {
+      clientId: v.clientId,
+      manufacturer: v.manufacturer.trim(),
+      model: v.model.trim(),
+      serialNumber: v.serialNumber.trim(),
+      firmware: v.firmware.trim() || undefined,
+      ratedPepW: Number(v.ratedPepW),
+      emissionDesignator: v.emissionDesignator.toUpperCase(),
+      frequencyMinHz: Math.round(Number(v.frequencyMinMHz) * 1e6),
+      frequencyMaxHz: Math.round(Number(v.frequencyMaxMHz) * 1e6),
+      modes,
+      receivedOn: v.receivedOn,
+      condition: v.condition.trim(),
+    };
+    (id ? this.api.update(id, body) : this.api.create(body)).subscribe({
+      next: (device) => void (id ? this.router.navigate(['/devices']) : this.router.navigate(['/plans/new'], { queryParams: { deviceId: device.id } })),
+      error: (error) => {
+        this.error.set(problemMessage(error));
+        this.fieldErrors.set(problemFieldErrors(error));
+        this.busy.set(false);
+      },
+    });
   }
 }

@@ -29,6 +29,15 @@ export class DevicesApi {
     return this.http.post<DeviceRow>('/api/devices', body);
   }
 
+  get(id: string): Observable<DeviceRow> {
+    return this.http.get<DeviceRow>(`/api/devices/${encodeURIComponent(id)}`);
+  }
+
+  /** Replaces the record; once a report is issued on the device its identification is refused with 409. */
+  update(id: string, body: CreateDeviceBody): Observable<DeviceRow> {
+    return this.http.put<DeviceRow>(`/api/devices/${encodeURIComponent(id)}`, body);
+  }
+
   clients(): Observable<Page<ClientRow>> {
     return this.http.get<Page<ClientRow>>('/api/clients', { params: { pageSize: 200 } });
   }

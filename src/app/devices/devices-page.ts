@@ -51,6 +51,7 @@ import { SessionStore } from '../session/session-store';
             <th mat-header-cell *matHeaderCellDef><span class="visually-hidden">Actions</span></th>
             <td mat-cell *matCellDef="let d">
               @if (session.hasRole('engineer', 'lab-admin')) {
+                <a mat-button [routerLink]="['/devices', d.id, 'edit']" [attr.aria-label]="'Change ' + d.model + ' s/n ' + d.serialNumber">Change</a>
                 <a mat-button [routerLink]="['/plans/new']" [queryParams]="{ deviceId: d.id }">Build a test plan</a>
               }
             </td>

@@ -15,6 +15,7 @@ import { RunsApi, type RunRow } from '../runs/runs-api';
 import { problemMessage } from '../session/problem-message';
 import { SessionStore } from '../session/session-store';
 import { StateBadge } from '../ui/state-badge';
+import { HomePanels } from './home-panels';
 
 const QUEUES = [
   { value: 'testing,draft', label: 'On the bench' },
@@ -26,7 +27,7 @@ const QUEUES = [
 
 @Component({
   selector: 'sc-home-page',
-  imports: [DatePipe, RouterLink, FormsModule, MatTableModule, MatPaginatorModule, MatSortModule, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatInputModule, MatIconModule, MatProgressBarModule, StateBadge],
+  imports: [DatePipe, RouterLink, FormsModule, MatTableModule, MatPaginatorModule, MatSortModule, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatInputModule, MatIconModule, MatProgressBarModule, StateBadge, HomePanels],
   templateUrl: './home-page.html',
   styleUrl: './home-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

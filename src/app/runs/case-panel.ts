@@ -16,11 +16,13 @@ import { TEST_KIND_LABELS } from '../../../shared/rules/test-kind';
 import { RunsApi, type RunCase, type StoredResult } from './runs-api';
 import { problemMessage } from '../session/problem-message';
 import { VerdictChip } from '../ui/verdict-chip';
+import { CaseUpload, evidenceFor } from './case-upload';
+import { PhasingDiagnosis } from './phasing-diagnosis';
 
 /** One test case of a run: its reading form, the live result computed in the browser, and the server's stored result. */
 @Component({
   selector: 'sc-case-panel',
-  imports: [DecimalPipe, ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule, MatIconModule, MatProgressSpinnerModule, VerdictChip],
+  imports: [DecimalPipe, ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule, MatIconModule, MatProgressSpinnerModule, VerdictChip, CaseUpload, PhasingDiagnosis],
   templateUrl: './case-panel.html',
   styleUrl: './case-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -33,9 +35,14 @@ export class CasePanel {
   readonly rules = input.required<RuleSetBody>();
   readonly editable = input(false);
   readonly saved = output<StoredResult | null>();
+  readonly uploaded = output<void>();
 
   protected readonly kindLabels = TEST_KIND_LABELS;
   protected readonly fields = computed(() => READING_FIELDS[this.testCase().kind]);
+  /** Trace and I/Q kinds take a file; those without hand fields take only a file. */
+  protected readonly uploadable = computed(() => evidenceFor(this.testCase().kind).length > 0);
+  protected readonly maskReference = computed(() => this.rules().limits.emissionMask?.reference ?? 'mean');
+  protected readonly latestUploadId = computed(() => this.testCase().uploads?.[0]?.id ?? null);
   protected readonly form = new FormGroup<Record<string, FormControl<number | null>>>({});
   private readonly values = toSignal(this.form.valueChanges.pipe(startWith(this.form.value)), { initialValue: {} });
   protected readonly saving = signal(false);

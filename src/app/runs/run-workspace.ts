@@ -12,11 +12,12 @@ import { problemMessage } from '../session/problem-message';
 import { SessionStore } from '../session/session-store';
 import { StateBadge } from '../ui/state-badge';
 import { RfCaution } from '../ui/rf-caution';
+import { RunInstruments } from './run-instruments';
 
 /** The run workspace: every test case of a run, and the commands that move it along. */
 @Component({
   selector: 'sc-run-workspace',
-  imports: [RouterLink, FormsModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, CasePanel, StateBadge, RfCaution],
+  imports: [RouterLink, FormsModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, CasePanel, StateBadge, RfCaution, RunInstruments],
   templateUrl: './run-workspace.html',
   styleUrl: './run-workspace.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -36,7 +37,8 @@ export class RunWorkspace {
   protected readonly returning = signal(false);
 
   protected readonly editable = computed(() => this.run()?.state === 'testing' && this.session.hasRole('engineer', 'lab-admin'));
-  protected readonly complete = computed(() => this.run()?.testCases.every((c) => !!c.result) ?? false);
+  protected readonly complete = computed(() => this.run()?.testCases.every((c) => !!c.result || !!c.traceResult) ?? false);
+  protected readonly canEditInstruments = computed(() => this.editable());
   protected readonly canSubmit = computed(() => this.editable());
   protected readonly canReview = computed(() => this.run()?.state === 'in-review' && this.session.hasRole('reviewer', 'lab-admin'));
   protected readonly canIssue = computed(() => this.run()?.state === 'approved' && this.session.hasRole('reviewer', 'lab-admin'));
@@ -79,6 +81,11 @@ export class RunWorkspace {
         this.acting.set(false);
       },
     });
+  }
+
+  instrumentsChanged(run: RunDetail): void {
+    this.run.set(run);
+    this.notice.set('Instruments saved. Their calibration and uncertainty join every result saved from now on.');
   }
 
   caseSaved(): void {

@@ -4,6 +4,7 @@ import type { Observable } from 'rxjs';
 import type { RunState } from '../../../shared/runs/run-state';
 import type { TestKind } from '../../../shared/rules/test-kind';
 import type { RuleSetBody } from '../../../shared/rules/rule-set';
+import type { UploadResult, UploadSummary } from './uploads-api';
 
 export interface Page<T> {
   items: T[];
@@ -24,6 +25,25 @@ export interface RunRow {
   client: string;
 }
 
+/** One row of a stored uncertainty budget (GUM: u_i, |c_i|·u_i and its share of u_c²). */
+export interface BudgetRow {
+  name: string;
+  standard: number;
+  contribution: number;
+  varianceShare: number;
+}
+
+/** What the server keeps beside a result (server/runs/run-service.ts saveReading). */
+export interface StoredResultDetail {
+  limitText?: string;
+  direction?: 'at-least' | 'at-most';
+  decisionRuleText?: string;
+  budget?: BudgetRow[];
+  inputs?: Record<string, unknown>;
+  combinedStandard?: number;
+  instruments?: { id: string; name: string; serialNumber: string; calibrationDue: string; certificateRef: string }[];
+}
+
 export interface StoredResult {
   id: string;
   readingId: string;
@@ -35,8 +55,19 @@ export interface StoredResult {
   expandedUncertainty: number | null;
   coverageFactor: number | null;
   verdict: string;
-  detail: Record<string, unknown>;
+  detail: StoredResultDetail & Record<string, unknown>;
   createdAt: string;
+}
+
+export interface RunInstrument {
+  id: string;
+  name: string;
+  model: string;
+  serialNumber: string;
+  calibratedOn: string;
+  calibrationDue: string;
+  calibrationStatus: 'valid' | 'due-soon' | 'overdue';
+  certificateRef: string;
 }
 
 export interface RunCase {
@@ -45,8 +76,12 @@ export interface RunCase {
   kind: TestKind;
   label: string;
   parameters: { frequencyHz?: number; sideband?: string; powerLevel?: string | null };
-  reading: { id: string; values: Record<string, number | string | null>; createdAt: string } | null;
+  reading: { id: string; values: Record<string, number | string | null>; enteredBy?: string | null; createdAt: string } | null;
   result: StoredResult | null;
+  /** Files uploaded for the case, newest first (server/uploads). */
+  uploads?: UploadSummary[];
+  /** The latest result computed from an uploaded trace or capture. */
+  traceResult?: UploadResult | null;
 }
 
 export interface RunDetail {
@@ -56,6 +91,9 @@ export interface RunDetail {
   engineerId: string | null;
   reviewerId: string | null;
   returnReason: string | null;
+  testedFrom?: string | null;
+  testedTo?: string | null;
+  instruments?: RunInstrument[];
   plan: { id: string; name: string; ruleSet: RuleSetBody & { name?: string; version?: number } };
   device: { id: string; manufacturer: string; model: string; serialNumber: string; emissionDesignator: string; ratedPepW: number };
   client: { id: string; name: string; contactName: string; contactEmail: string };
@@ -93,5 +131,10 @@ export class RunsApi {
 
   act(runId: string, action: 'submit' | 'approve' | 'return' | 'issue', reason?: string): Observable<unknown> {
     return this.http.post(`/api/runs/${encodeURIComponent(runId)}/${action}`, reason ? { reason } : {});
+  }
+
+  /** The whole set of instruments used on the run; the server refuses one past its calibration. */
+  setInstruments(runId: string, instrumentIds: string[]): Observable<RunDetail> {
+    return this.http.put<RunDetail>(`/api/runs/${encodeURIComponent(runId)}/instruments`, { instrumentIds });
   }
 }

@@ -5,6 +5,8 @@ import type { Role } from '../../../shared/access/roles';
 
 export interface Membership {
   organizationId: string;
+  /** Sent by the server beside the id (server/auth/tokens.ts loadPrincipal), for the organization switcher. */
+  organizationName?: string;
   kind: 'lab' | 'manufacturer';
   roles: Role[];
 }

@@ -3,9 +3,10 @@ import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/rou
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
-import { MatSelectModule } from '@angular/material/select';
 import { MatTooltipModule } from '@angular/material/tooltip';
 import { SessionStore } from '../session/session-store';
+import { SCREEN_ROLES } from '../accounts/screen-roles';
+import { OrganizationSwitcher } from './organization-switcher';
 import { ROLE_LABELS, type Role } from '../../../shared/access/roles';
 
 interface NavItem {
@@ -13,18 +14,28 @@ interface NavItem {
   label: string;
   icon: string;
   roles: Role[];
+  /** Shown to a person with no organization at all: an outside auditor. */
+  auditor?: boolean;
   exact?: boolean;
 }
 
 const NAV: NavItem[] = [
   { path: '/', label: 'Bench board', icon: 'dashboard', roles: ['lab-admin', 'engineer', 'reviewer', 'billing'], exact: true },
   { path: '/devices', label: 'Devices', icon: 'settings_input_antenna', roles: ['lab-admin', 'engineer', 'reviewer'] },
+  { path: '/clients', label: 'Clients', icon: 'groups', roles: [...SCREEN_ROLES.labRecords] },
+  { path: '/equipment', label: 'Equipment', icon: 'speed', roles: [...SCREEN_ROLES.labRecords] },
+  { path: '/rule-sets', label: 'Rule sets', icon: 'rule', roles: [...SCREEN_ROLES.labRecords] },
   { path: '/reports', label: 'Reports', icon: 'verified', roles: ['lab-admin', 'engineer', 'reviewer', 'billing', 'manufacturer-admin', 'manufacturer-viewer'] },
+  { path: '/portal', label: 'Our devices', icon: 'inventory_2', roles: ['manufacturer-admin', 'manufacturer-viewer'], exact: true },
+  { path: '/billing', label: 'Credits', icon: 'toll', roles: ['manufacturer-admin', 'manufacturer-viewer'] },
+  { path: '/portal/precheck', label: 'Pre-check', icon: 'troubleshoot', roles: ['manufacturer-admin', 'manufacturer-viewer'] },
+  { path: '/auditor', label: 'Shared with me', icon: 'policy', roles: [], auditor: true },
+  { path: '/settings', label: 'Settings', icon: 'settings', roles: [...SCREEN_ROLES.people] },
 ];
 
 @Component({
   selector: 'sc-shell',
-  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatButtonModule, MatIconModule, MatMenuModule, MatSelectModule, MatTooltipModule],
+  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatButtonModule, MatIconModule, MatMenuModule, MatTooltipModule, OrganizationSwitcher],
   templateUrl: './shell.html',
   styleUrl: './shell.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -33,14 +44,8 @@ export class Shell {
   protected readonly session = inject(SessionStore);
   private readonly router = inject(Router);
 
-  protected readonly nav = computed(() => NAV.filter((n) => this.session.hasRole(...n.roles)));
+  protected readonly nav = computed(() => NAV.filter((n) => (n.auditor ? this.session.user()?.memberships.length === 0 : this.session.hasRole(...n.roles))));
   protected readonly roleLabel = computed(() => this.session.roles().map((r) => ROLE_LABELS[r]).join(', '));
-  protected readonly organizations = computed(() => this.session.user()?.memberships ?? []);
-
-  switchTo(organizationId: string): void {
-    this.session.switchOrganization(organizationId);
-    void this.router.navigateByUrl('/');
-  }
 
   async signOut(): Promise<void> {
     await this.session.signOut();

@@ -1,0 +1,39 @@
+import crypto from 'node:crypto';
+import { uploadFieldsSchema, type UploadFields } from '../../shared/schemas/uploads';
+import type { Instrument, TestCase, TestPlan, TestRun } from '../db/models';
+import type { RouteContext } from '../http/route';
+import { contributionsByBudget } from '../instruments/run-instruments';
+import { evaluateUpload, uploadResultDetail } from '../analysis/evaluate-upload';
+import { prepareUpload } from './prepare-upload';
+import type { ReceivedUpload } from './receive-multipart';
+import { recordUpload } from './record-upload';
+import { caseDefaults } from './upload-target';
+import type { UploadDeps } from './upload-deps';
+import { presentUploadDetail } from './upload-presenter';
+
+/**
+ * From received parts to a stored upload with its result, for one test case of a run: identify
+ * and analyse (prepareUpload), judge against the plan's rule set with the bench instruments'
+ * contributions in the budget, then store files and rows whole or not at all (recordUpload).
+ * The API's upload route and the demo seed both come through here. The caller removes the
+ * received folder afterwards (`received.discard()`), whatever happened.
+ */
+export async function ingestUpload(
+  deps: UploadDeps,
+  ctx: RouteContext,
+  target: { run: TestRun; testCase: TestCase; plan: TestPlan; instruments: Instrument[] },
+  received: ReceivedUpload,
+) {
+  const { run, testCase, plan, instruments } = target;
+  const prepared = await prepareUpload<UploadFields>(received, { schema: uploadFieldsSchema, maxTraceBytes: deps.settings.maxTraceBytes, defaults: caseDefaults(testCase) });
+  const rules = plan.ruleSetSnapshot;
+  const evaluation = evaluateUpload({ kind: testCase.kind, evidence: prepared.evidence, rules, contributions: contributionsByBudget(instruments) });
+  const detail = uploadResultDetail(evaluation, {
+    summary: prepared.summary,
+    rules,
+    instruments: instruments.map((i) => ({ id: i.id, name: i.name, serialNumber: i.serialNumber, calibrationDue: i.calibrationDue, certificateRef: i.certificateRef })),
+  });
+  const parameters = { ...prepared.fields, carrierHz: prepared.carrierHz, sideband: prepared.sideband };
+  const { upload, result } = await recordUpload(deps, ctx, { uploadId: crypto.randomUUID(), runId: run.id, testCaseId: testCase.id, prepared, parameters, evaluation, detail });
+  return presentUploadDetail(upload, result);
+}

@@ -1,0 +1,35 @@
+import { HttpClient } from '@angular/common/http';
+import { Injectable, inject } from '@angular/core';
+import type { Observable } from 'rxjs';
+
+/**
+ * The lab's details as printed on its reports (ISO/IEC 17025:2017 7.8.2.1 b: the laboratory's
+ * name and address), with the contact and accreditation lines of the report's first page.
+ */
+export interface LabDetails {
+  name: string;
+  code: string;
+  addressLines: string[];
+  email: string | null;
+  phone: string | null;
+  accreditation: string | null;
+}
+
+export type LabDetailsBody = Omit<LabDetails, 'code'>;
+
+/**
+ * GET and PUT /api/organization: the active organization's own record. The contract follows the
+ * organizations table (server/db/models/organization.ts); the code is fixed once reports carry it.
+ */
+@Injectable({ providedIn: 'root' })
+export class LabDetailsApi {
+  private readonly http = inject(HttpClient);
+
+  get(): Observable<LabDetails> {
+    return this.http.get<LabDetails>('/api/organization');
+  }
+
+  save(body: LabDetailsBody): Observable<LabDetails> {
+    return this.http.put<LabDetails>('/api/organization', body);
+  }
+}

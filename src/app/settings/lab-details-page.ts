@@ -1,0 +1,77 @@
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { problemFieldErrors, problemMessage } from '../session/problem-message';
+import { addressLines } from '../accounts/address-lines';
+import { LabDetailsApi } from './lab-details-api';
+
+/** The lab's name, address, contact and accreditation as printed on every report it issues from now on. */
+@Component({
+  selector: 'sc-lab-details-page',
+  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule],
+  templateUrl: './lab-details-page.html',
+  styleUrl: './settings-section.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class LabDetailsPage {
+  private readonly api = inject(LabDetailsApi);
+
+  protected readonly loading = signal(true);
+  protected readonly busy = signal(false);
+  protected readonly error = signal<string | null>(null);
+  protected readonly notice = signal<string | null>(null);
+  protected readonly fieldErrors = signal<Record<string, string>>({});
+  protected readonly code = signal('');
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    name: ['', [Validators.required, Validators.maxLength(200), Validators.pattern(/\S/)]],
+    address: ['', [Validators.required, Validators.pattern(/\S/)]],
+    email: ['', Validators.email],
+    phone: ['', Validators.maxLength(50)],
+    accreditation: ['', Validators.maxLength(200)],
+  });
+
+  constructor() {
+    this.load();
+  }
+
+  load(): void {
+    this.loading.set(true);
+    this.error.set(null);
+    this.api.get().subscribe({
+      next: (lab) => {
+        this.code.set(lab.code);
+        this.form.setValue({ name: lab.name, address: lab.addressLines.join('\n'), email: lab.email ?? '', phone: lab.phone ?? '', accreditation: lab.accreditation ?? '' });
+        this.loading.set(false);
+      },
+      error: (error) => {
+        this.error.set(problemMessage(error));
+        this.loading.set(false);
+      },
+    });
+  }
+
+  save(): void {
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const v = this.form.getRawValue();
+    this.busy.set(true);
+    this.error.set(null);
+    this.notice.set(null);
+    this.api.save({ name: v.name.trim(), addressLines: addressLines(v.address).slice(0, 6), email: v.email.trim() || null, phone: v.phone.trim() || null, accreditation: v.accreditation.trim() || null }).subscribe({
+      next: () => {
+        this.busy.set(false);
+        this.notice.set('Saved. Reports issued from now on carry these details; reports already issued keep theirs.');
+      },
+      error: (error) => {
+        this.busy.set(false);
+        this.error.set(problemMessage(error));
+        this.fieldErrors.set(problemFieldErrors(error));
+      },
+    });
+  }
+}
