@@ -13,6 +13,8 @@ module.exports = {
     {
       displayName: 'server',
       rootDir: __dirname,
+      // Signing and PDF work run for real; a busy 2-core machine needs more than Jest's 5 s.
+      testTimeout: 30_000,
       testEnvironment: 'node',
       testMatch: ['<rootDir>/server/**/*.spec.ts', '<rootDir>/fakes/**/*.spec.ts'],
       transform: { '^.+\\.ts$': tsJest },
@@ -29,6 +31,7 @@ module.exports = {
     {
       displayName: 'e2e',
       rootDir: __dirname,
+      testTimeout: 60_000,
       testEnvironment: 'node',
       testMatch: ['<rootDir>/test/e2e/**/*.test.ts', '<rootDir>/test/security/**/*.test.ts', '<rootDir>/test/faults/**/*.test.ts'],
       transform: { '^.+\\.ts$': tsJest },

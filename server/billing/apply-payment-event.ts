@@ -9,14 +9,12 @@ import { completePurchase } from './complete-purchase';
 import { lockPurchaseFor } from './lock-purchase';
 import type { BillingDeps } from './billing-deps';
 
-export type EventOutcome = string;
-
 /**
  * Apply `event` inside the webhook's system transaction `t` and return a short word for the log
  * and the answer ('credited', 'already-completed', 'noted', 'ignored', ...).
  * @example await applyPaymentEvent(deps, t, event) // 'credited'
  */
-export async function applyPaymentEvent(deps: BillingDeps, t: Transaction, event: Stripe.Event): Promise<EventOutcome> {
+export async function applyPaymentEvent(deps: BillingDeps, t: Transaction, event: Stripe.Event): Promise<string> {
   switch (event.type) {
     case 'checkout.session.completed':
     case 'checkout.session.async_payment_succeeded': {
@@ -47,7 +45,7 @@ export async function applyPaymentEvent(deps: BillingDeps, t: Transaction, event
 }
 
 /** Change a purchase only while it is pending: late or repeated events leave a finished one alone. */
-async function notePending(purchaseId: string | undefined, sessionId: string | null, change: { status?: 'expired'; paymentIntentId?: string; lastPaymentError?: string | null }): Promise<EventOutcome> {
+async function notePending(purchaseId: string | undefined, sessionId: string | null, change: { status?: 'expired'; paymentIntentId?: string; lastPaymentError?: string | null }): Promise<string> {
   const purchase = await lockPurchaseFor(purchaseId, sessionId);
   if (!purchase) return 'unknown-purchase';
   if (purchase.status !== 'pending') return `already-${purchase.status}`;

@@ -151,6 +151,16 @@ describe('paying for a pack', () => {
     expect((await otherLab('get', `/billing/purchases/${purchaseId}/receipt`)).status).toBe(404);
     expect((await otherLab('get', '/billing/purchases')).body.total).toBe(0);
 
+    // A second checkout reuses the provider customer; lists page, filter and sort on the server.
+    const again = await checkout(maker, s.lab.id, 'pack-1');
+    expect((await stack.payments.stripe.checkout.sessions.retrieve(sessionIdOf(again.url))).customer).toBe(session.customer);
+    expect((await stack.payments.stripe.customers.list({ limit: 100 })).data.filter((c) => c.metadata.organizationId === s.maker.id)).toHaveLength(1);
+    const firstPage = (await maker('get', '/billing/purchases?pageSize=1&sort=-amountMinor')).body;
+    expect(firstPage).toMatchObject({ total: 2, page: 1, pageSize: 1, items: [{ id: purchaseId }] });
+    expect((await maker('get', '/billing/purchases?status=pending')).body.items.map((p: { id: string }) => p.id)).toEqual([again.purchaseId]);
+    expect((await maker('get', '/billing/purchases?sort=secret')).status).toBe(400);
+    expect((await maker('get', '/billing/purchases?status=paid')).status).toBe(400);
+
     const [mail] = await mailJobs(stack.t, done.receiptNumber);
     expect(mail.data.to).toBe(s.makerAdmin.email);
     expect(mail.data.attachments?.[0].filename).toBe(`${done.receiptNumber}.pdf`);

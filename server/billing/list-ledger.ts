@@ -8,6 +8,7 @@ import { badRequest } from '../http/problem';
 import type { ListQuery } from '../http/list-query';
 import type { BillingSide } from './billing-side';
 
+/** Query filters of GET /billing/ledger (a lab filters by client, a manufacturer by lab). */
 export const LEDGER_FILTERS = ['clientId', 'labId'] as const;
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 

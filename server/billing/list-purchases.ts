@@ -10,7 +10,9 @@ import type { ListQuery } from '../http/list-query';
 import type { BillingSide } from './billing-side';
 import type { PurchaseRow } from './purchase-presenter';
 
+/** Sortable fields of GET /billing/purchases and their columns (an allow-list: nothing else reaches SQL). */
 export const PURCHASE_SORTS = { createdAt: 'p.created_at', amountMinor: 'p.amount_minor', status: 'p.status' } as const;
+/** Query filters of GET /billing/purchases. */
 export const PURCHASE_FILTERS = ['status', 'clientId', 'labId'] as const;
 const STATUSES = ['pending', 'completed', 'expired', 'needs-review'];
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;

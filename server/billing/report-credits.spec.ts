@@ -214,3 +214,15 @@ describe('two issues at once', () => {
     expect((await ledgerOf(t, s.lab.id, s.client.id)).balance).toBe(0);
   });
 });
+
+describe('checkout while the payment service is unreachable', () => {
+  it('answers 503 saying nothing was charged, and stores no purchase', async () => {
+    // startTestApp points the payment client at 127.0.0.1:1, where nothing listens.
+    const { s } = await approvedRun();
+    const maker = await actingAs(t, s.makerAdmin, s.maker.id);
+    const res = await maker('post', '/billing/checkout', { labId: s.lab.id, packId: 'pack-5' });
+    expect(res.status).toBe(503);
+    expect(res.body.detail).toMatch(/nothing was charged/);
+    expect((await maker('get', '/billing/purchases')).body.total).toBe(0);
+  });
+});

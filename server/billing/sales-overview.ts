@@ -2,6 +2,7 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type { ListQuery } from '../http/list-query';
 
+/** Sortable fields of the client balances in GET /billing/sales and their SQL (an allow-list). */
 export const BALANCE_SORTS = { name: 'c.name', balance: 'balance', lastActivityAt: '"lastActivityAt"' } as const;
 
 interface ClientBalanceRow {

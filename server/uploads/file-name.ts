@@ -13,7 +13,6 @@ const MAX_NAME_LENGTH = 200;
  * @example keptFileName('Trace #3 (2182 kHz).csv', 'file') // 'Trace _3 (2182 kHz).csv'
  */
 export function keptFileName(originalName: string, part: 'file' | 'data'): string {
-  // eslint-disable-next-line no-control-regex
   if (/[/\\\u0000-\u001f\u007f]/.test(originalName) || originalName === '..' || originalName === '.') {
     throw validationFailed(`The ${part} name "${printable(originalName)}" has a folder or control characters in it; send the file under a plain name. Nothing was stored.`, [{ pointer: `/${part}`, message: 'must be a plain file name' }]);
   }
@@ -27,6 +26,5 @@ export function keptFileName(originalName: string, part: 'file' | 'data'): strin
 }
 
 function printable(name: string): string {
-  // eslint-disable-next-line no-control-regex
   return name.replace(/[\u0000-\u001f\u007f]/g, '?').slice(0, 80);
 }

@@ -39,7 +39,8 @@ function isText(head: Buffer): boolean {
  */
 export function identifyUpload(file: ReceivedPart, data: ReceivedPart | null, declared: UploadFormat | undefined): UploadFormat {
   if (file.sizeBytes === 0) throw validationFailed('The file is empty. Nothing was stored.', [{ pointer: '/file', message: 'is empty' }]);
-  const content = detectFileKind('', file.head.subarray(0, 512));
+  // 8 KiB, not just 512 bytes: analyzer exports may open with a long block of '#' comments.
+  const content = detectFileKind('', file.head.subarray(0, 8192));
   let format: UploadFormat;
   if (content.kind === 'wav') format = 'wav';
   else if (content.kind === 'sigmf-meta') format = 'sigmf';

@@ -17,6 +17,7 @@ import { ClientsApi, type Client } from './clients-api';
   selector: 'sc-client-form-page',
   imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule],
   templateUrl: './client-form-page.html',
+  styles: `.spacer { flex: 1; }`,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ClientFormPage implements OnInit {

@@ -9,7 +9,12 @@ describe('activityText', () => {
     [{ who: null, action: 'run-issue', entity: 'test-run' }, 'Sidecheck issued a report'],
     [{ who: { displayName: 'A' }, action: 'price-list-save', entity: 'credit-price-list' }, 'A price list save (credit price list)'],
   ])('%j', (entry, expected) => {
-    expect(activityText(entry)).toBe(expected);
+    expect(activityText(entry, 'someone-else')).toBe(expected);
+  });
+
+  it('says "You" for the reader\'s own entries', () => {
+    expect(activityText({ who: { userId: 'u1', displayName: 'Imogen Varga' }, action: 'copy', entity: 'rule-set' }, 'u1')).toBe('You copied a rule set');
+    expect(activityText({ who: { userId: 'u1', displayName: 'Imogen Varga' }, action: 'copy', entity: 'rule-set' })).toBe('Imogen Varga copied a rule set');
   });
 });
 

@@ -36,11 +36,13 @@ const PHRASES: Record<string, string> = {
 
 /**
  * A line for the recent-activity panel: who did what, e.g. "Imogen Varga added an instrument to
- * the register". An unknown action is still shown, as "action entity". Never throws.
- * @example activityText({ who: { displayName: 'Tomasz Ellery' }, action: 'run-submit', entity: 'test-run' }) // 'Tomasz Ellery sent a run for review'
+ * the register", and "You …" for the reader's own entries (`myUserId`). An unknown action is
+ * still shown, as "action (entity)". Never throws.
+ * @example activityText({ who: { userId: 'u2', displayName: 'Tomasz Ellery' }, action: 'run-submit', entity: 'test-run' }, 'u1') // 'Tomasz Ellery sent a run for review'
  */
-export function activityText(entry: Pick<ActivityEntry, 'action' | 'entity'> & { who: { displayName: string | null } | null }): string {
-  const who = entry.who?.displayName ?? (entry.who ? 'Someone' : 'Sidecheck');
+export function activityText(entry: Pick<ActivityEntry, 'action' | 'entity'> & { who: { userId?: string; displayName: string | null } | null }, myUserId?: string): string {
+  const mine = !!entry.who?.userId && entry.who.userId === myUserId;
+  const who = mine ? 'You' : (entry.who?.displayName ?? (entry.who ? 'Someone' : 'Sidecheck'));
   const what = PHRASES[`${entry.action} ${entry.entity}`] ?? `${entry.action.replace(/-/g, ' ')} (${entry.entity.replace(/-/g, ' ')})`;
   return `${who} ${what}`;
 }

@@ -4,6 +4,7 @@ import { RouterLink } from '@angular/router';
 import { MatButtonModule } from '@angular/material/button';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { problemMessage } from '../session/problem-message';
+import { SessionStore } from '../session/session-store';
 import { StateBadge } from '../ui/state-badge';
 import { CalibrationChip } from '../equipment/calibration-chip';
 import { RUN_STATES, RUN_STATE_LABELS, type RunState } from '../../../shared/runs/run-state';
@@ -23,6 +24,7 @@ const QUEUE_OF: Partial<Record<RunState, string>> = { draft: 'testing,draft', te
 })
 export class HomePanels {
   private readonly api = inject(HomeApi);
+  private readonly session = inject(SessionStore);
 
   /** A state count was chosen: show that queue in the runs table. */
   readonly queueChosen = output<string>();
@@ -35,6 +37,7 @@ export class HomePanels {
     return counts ? RUN_STATES.map((state) => ({ state, label: RUN_STATE_LABELS[state], count: counts[state] ?? 0, queue: QUEUE_OF[state] ?? null })) : [];
   });
   protected readonly totalRuns = computed(() => this.states().reduce((n, s) => n + s.count, 0));
+  protected readonly myUserId = computed(() => this.session.user()?.userId);
   protected readonly text = activityText;
   protected readonly link = activityLink;
 

@@ -78,13 +78,17 @@ export class CreditsPage {
     this.buying.set(`${offer.lab.id}:${pack.id}`);
     this.buyError.set(null);
     this.api.checkout(offer.lab.id, pack.id).subscribe({
-      // The hosted payment page is the provider's; the browser comes back to /billing.
-      next: ({ url }) => this.document.location.assign(url),
+      next: ({ url }) => this.leaveFor(url),
       error: (e) => {
         this.buyError.set(problemMessage(e));
         this.buying.set(null);
       },
     });
+  }
+
+  /** The hosted payment page is the provider's; the browser leaves the app and comes back to /billing. */
+  protected leaveFor(url: string): void {
+    this.document.location.assign(url);
   }
 
   changePage(e: PageEvent): void {

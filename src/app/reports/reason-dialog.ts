@@ -24,7 +24,7 @@ export interface ReasonDialogData {
   imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule],
   template: `
     <h2 mat-dialog-title>{{ data.title }}</h2>
-    <form (ngSubmit)="confirm()">
+    <form (submit)="$event.preventDefault(); confirm()">
       <mat-dialog-content>
         <p class="intro">{{ data.intro }}</p>
         <mat-form-field class="field">

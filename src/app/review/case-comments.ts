@@ -33,7 +33,7 @@ const ROLE_WORDS: Record<CaseComment['authorRole'], string> = { reviewer: 'Revie
         }
       </ol>
       @if (canWrite()) {
-        <form (ngSubmit)="send()" class="new">
+        <form (submit)="$event.preventDefault(); send()" class="new">
           <mat-form-field>
             <mat-label>Add a comment</mat-label>
             <textarea matInput [formControl]="draft" rows="2" [attr.maxlength]="max"></textarea>

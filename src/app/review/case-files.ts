@@ -24,9 +24,9 @@ import { problemMessage } from '../session/problem-message';
               <div class="line">
                 <span><strong>{{ u.file.name }}</strong>@if (u.data; as d) { + {{ d.name }}} · {{ u.format }} · {{ totalBytes(u) / 1e6 | number: '1.1-2' }} MB · {{ u.createdAt | date: 'd MMM y, HH:mm' }}{{ first ? ' · latest' : '' }}</span>
                 <span class="downloads">
-                  <button mat-button type="button" (click)="download(u.file)" [attr.aria-label]="'Download ' + u.file.name"><mat-icon>download</mat-icon>Raw file</button>
+                  <button mat-button type="button" (click)="download(u.file)" [attr.aria-label]="'Raw file ' + u.file.name"><mat-icon>download</mat-icon>Raw file</button>
                   @if (u.data; as d) {
-                    <button mat-button type="button" (click)="download(d)" [attr.aria-label]="'Download ' + d.name"><mat-icon>download</mat-icon>Samples</button>
+                    <button mat-button type="button" (click)="download(d)" [attr.aria-label]="'Samples ' + d.name"><mat-icon>download</mat-icon>Samples</button>
                   }
                 </span>
               </div>

@@ -3,7 +3,7 @@ import { HttpErrorResponse } from '@angular/common/http';
 import { KeyValuePipe } from '@angular/common';
 import { RouterLink } from '@angular/router';
 import { MatButtonModule } from '@angular/material/button';
-import { MatDialog, MatDialogModule } from '@angular/material/dialog';
+import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RunsApi, type RunDetail } from '../runs/runs-api';
@@ -22,7 +22,7 @@ type Outcome = { kind: 'done' | 'four-eyes' | 'error'; text: string };
  */
 @Component({
   selector: 'sc-review-page',
-  imports: [KeyValuePipe, RouterLink, MatButtonModule, MatDialogModule, MatIconModule, MatProgressBarModule, StateBadge, CaseReview],
+  imports: [KeyValuePipe, RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, StateBadge, CaseReview],
   templateUrl: './review-page.html',
   styleUrl: './review-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

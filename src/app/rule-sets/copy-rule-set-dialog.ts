@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
-import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -16,7 +16,7 @@ export interface CopyRuleSetDialogData {
   imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule],
   template: `
     <h2 mat-dialog-title>Copy to your lab</h2>
-    <form (ngSubmit)="confirm()">
+    <form [formGroup]="form" (ngSubmit)="confirm()">
       <mat-dialog-content>
         <p class="intro">
           Your copy starts at version 1 and is yours to change.
@@ -26,7 +26,7 @@ export interface CopyRuleSetDialogData {
         </p>
         <mat-form-field class="field">
           <mat-label>Name of your rule set</mat-label>
-          <input matInput [formControl]="name" cdkFocusInitial required maxlength="200" />
+          <input matInput formControlName="name" cdkFocusInitial required maxlength="200" />
           <mat-error>Give your rule set a name.</mat-error>
         </mat-form-field>
       </mat-dialog-content>
@@ -43,6 +43,8 @@ export class CopyRuleSetDialog {
   protected readonly data = inject<CopyRuleSetDialogData>(MAT_DIALOG_DATA);
   private readonly ref = inject<MatDialogRef<CopyRuleSetDialog, string>>(MatDialogRef);
   protected readonly name = new FormControl(`${this.data.sourceName} (our copy)`.slice(0, 200), { nonNullable: true, validators: [Validators.required, Validators.pattern(/\S/)] });
+  // A FormGroupDirective on the form is what gives (ngSubmit); without it the browser would submit the page.
+  protected readonly form = new FormGroup({ name: this.name });
 
   confirm(): void {
     if (this.name.invalid) {

@@ -20,7 +20,7 @@ import { MaskVertexEditor } from './mask-vertex-editor';
 import { RuleSetsApi, type RuleSet } from './rule-sets-api';
 import { editedBody, ruleSetForm, type LimitGroup, type RuleSetForm } from './rule-set-form';
 
-const LIMIT_TITLES: Record<string, string> = {
+const LIMIT_TITLES: Partial<Record<string, string>> = {
   carrierSuppression: 'Carrier suppression',
   unwantedSideband: 'Unwanted sideband',
   intermodulation: 'Intermodulation',

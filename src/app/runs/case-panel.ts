@@ -71,13 +71,19 @@ export class CasePanel {
   });
 
   constructor() {
+    // The run is reloaded whenever any case saves; only a different stored reading replaces what is
+    // in the form, so values typed meanwhile in this case are never wiped.
+    let shownReadingId: string | null | undefined;
     effect(() => {
       const c = this.testCase();
+      const readingId = c.reading?.id ?? null;
       for (const f of READING_FIELDS[c.kind]) {
         if (!this.form.contains(f.key)) this.form.addControl(f.key, new FormControl<number | null>(null));
+        if (readingId === shownReadingId) continue;
         const v = c.reading?.values[f.key];
         this.form.controls[f.key].setValue(typeof v === 'number' ? v : null, { emitEvent: true });
       }
+      shownReadingId = readingId;
       this.stored.set(c.result);
     });
     effect(() => (this.editable() ? this.form.enable({ emitEvent: false }) : this.form.disable({ emitEvent: false })));

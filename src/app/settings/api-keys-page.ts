@@ -1,6 +1,6 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, signal, viewChild } from '@angular/core';
 import { DatePipe } from '@angular/common';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { Clipboard } from '@angular/cdk/clipboard';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -33,6 +33,7 @@ export class ApiKeysPage {
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly columns = ['name', 'prefix', 'createdAt', 'lastUsedAt', 'state', 'actions'];
+  private readonly formDirective = viewChild.required(FormGroupDirective);
   protected readonly form = inject(NonNullableFormBuilder).group({ name: ['', [Validators.required, Validators.maxLength(100), Validators.pattern(/\S/)]] });
 
   constructor() {
@@ -65,7 +66,7 @@ export class ApiKeysPage {
       next: (key) => {
         this.created.set(key);
         this.busy.set(false);
-        this.form.reset();
+        this.formDirective().resetForm();
         this.load();
       },
       error: (error) => {

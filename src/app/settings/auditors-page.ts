@@ -1,6 +1,6 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal, viewChild } from '@angular/core';
 import { DatePipe } from '@angular/common';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -37,7 +37,6 @@ export class AuditorsPage {
   private readonly devicesApi = inject(DevicesApi);
 
   protected readonly scopeWords = SCOPE_WORDS;
-  protected readonly statusWords = STATUS_WORDS;
   protected readonly scopes = Object.keys(SCOPE_WORDS) as AuditorScope[];
   protected readonly grants = signal<AuditorGrantRow[]>([]);
   protected readonly clients = signal<Client[]>([]);
@@ -48,6 +47,7 @@ export class AuditorsPage {
   protected readonly notice = signal<string | null>(null);
   protected readonly minDate = isoDaysFromNow(0);
   protected readonly columns = ['email', 'scope', 'expiresOn', 'status', 'actions'];
+  private readonly formDirective = viewChild.required(FormGroupDirective);
   protected readonly form = inject(NonNullableFormBuilder).group({
     email: ['', [Validators.required, Validators.email]],
     scope: ['all' as AuditorScope, Validators.required],
@@ -80,6 +80,10 @@ export class AuditorsPage {
     });
   }
 
+  protected statusWord(g: AuditorGrantRow): string {
+    return STATUS_WORDS[g.status] ?? g.status;
+  }
+
   protected coverage(g: AuditorGrantRow): string {
     if (g.scope === 'client') return `Reports of ${this.clientNames().get(g.clientId ?? '') ?? 'a client'}`;
     if (g.scope === 'device') return `Reports on ${this.deviceNames().get(g.deviceId ?? '') ?? 'a device'}`;
@@ -109,7 +113,7 @@ export class AuditorsPage {
         next: (g) => {
           this.busy.set(false);
           this.notice.set(`Access for ${g.email} until ${g.expiresOn}: an invitation is on its way.`);
-          this.form.reset();
+          this.formDirective().resetForm();
           this.load();
         },
         error: (error) => {

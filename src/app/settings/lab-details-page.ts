@@ -20,6 +20,8 @@ export class LabDetailsPage {
   private readonly api = inject(LabDetailsApi);
 
   protected readonly loading = signal(true);
+  /** Saving is offered only over details actually read, never over an empty form. */
+  protected readonly loaded = signal(false);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly notice = signal<string | null>(null);
@@ -45,10 +47,13 @@ export class LabDetailsPage {
         this.code.set(lab.code);
         this.form.setValue({ name: lab.name, address: lab.addressLines.join('\n'), email: lab.email ?? '', phone: lab.phone ?? '', accreditation: lab.accreditation ?? '' });
         this.loading.set(false);
+        this.loaded.set(true);
+        this.form.enable();
       },
       error: (error) => {
         this.error.set(problemMessage(error));
         this.loading.set(false);
+        if (!this.loaded()) this.form.disable();
       },
     });
   }

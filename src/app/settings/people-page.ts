@@ -1,6 +1,6 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal, viewChild } from '@angular/core';
 import { DatePipe } from '@angular/common';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -27,6 +27,7 @@ export class PeoplePage {
 
   protected readonly roleLabels = ROLE_LABELS;
   protected readonly roles = computed<readonly Role[]>(() => (this.session.membership()?.kind === 'manufacturer' ? MANUFACTURER_ROLES : LAB_ROLES));
+  protected readonly activeOrganizationId = computed(() => this.session.membership()?.organizationId ?? null);
   protected readonly members = signal<Member[]>([]);
   protected readonly invitations = signal<OpenInvitation[]>([]);
   protected readonly loading = signal(true);
@@ -35,6 +36,7 @@ export class PeoplePage {
   protected readonly sending = signal(false);
   protected readonly memberColumns = ['name', 'roles', 'memberSince', 'actions'];
   protected readonly invitationColumns = ['email', 'role', 'expiresAt', 'actions'];
+  private readonly formDirective = viewChild.required(FormGroupDirective);
   protected readonly form = inject(NonNullableFormBuilder).group({
     email: ['', [Validators.required, Validators.email]],
     role: [this.session.membership()?.kind === 'manufacturer' ? 'manufacturer-viewer' : 'engineer', Validators.required],
@@ -69,7 +71,8 @@ export class PeoplePage {
       next: (invitation) => {
         this.sending.set(false);
         this.notice.set(`Invitation sent to ${invitation.email}. The link works for 7 days.`);
-        this.form.reset();
+        // resetForm also clears the submitted state, so the emptied field shows no error.
+        this.formDirective().resetForm({ email: '', role });
         this.load();
       },
       error: (error) => {
@@ -119,6 +122,10 @@ export class PeoplePage {
       },
       error: (error) => this.error.set(problemMessage(error)),
     });
+  }
+
+  protected roleLabel(role: Role | null): string {
+    return role ? ROLE_LABELS[role] : '—';
   }
 
   protected isMe(member: Member): boolean {

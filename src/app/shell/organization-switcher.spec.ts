@@ -28,7 +28,7 @@ describe('OrganizationSwitcher', () => {
     await fixture.whenStable();
     const button: HTMLButtonElement = fixture.nativeElement.querySelector('button');
     expect(button.textContent).toContain('Kestrel Bay Radio Test Laboratory');
-    expect(button.getAttribute('aria-label')).toBe('Organization: Kestrel Bay Radio Test Laboratory. Switch organization');
+    expect(button.querySelector('.visually-hidden')!.textContent).toBe('Organization: ');
     expect(fixture.nativeElement.textContent).not.toContain('aaaaaaaa');
     const navigate = jest.spyOn(TestBed.inject(Router), 'navigateByUrl').mockResolvedValue(true);
     (fixture.componentInstance as OrganizationSwitcher).switchTo('bbbbbbbb-0002');

@@ -16,8 +16,8 @@ import { organizationLabel } from './organization-label';
   imports: [MatButtonModule, MatIconModule, MatMenuModule],
   template: `
     @if (choices().length > 1) {
-      <button mat-button type="button" class="org" [matMenuTriggerFor]="orgs" [attr.aria-label]="'Organization: ' + current() + '. Switch organization'">
-        <mat-icon aria-hidden="true">apartment</mat-icon><span class="label">{{ current() }}</span><mat-icon aria-hidden="true" iconPositionEnd>arrow_drop_down</mat-icon>
+      <button mat-button type="button" class="org" [matMenuTriggerFor]="orgs" [title]="current()">
+        <mat-icon aria-hidden="true">apartment</mat-icon><span class="visually-hidden">Organization: </span><span class="label">{{ current() }}</span><mat-icon aria-hidden="true" iconPositionEnd>arrow_drop_down</mat-icon>
       </button>
       <mat-menu #orgs="matMenu" xPosition="before">
         @for (c of choices(); track c.organizationId) {
