@@ -35,6 +35,7 @@ const FILTERS = [
     .table-card { padding: 0; overflow: hidden; position: relative; }
     table { width: 100%; }
     .small { font-size: 12px; }
+    td.mat-column-serialNumber, td.mat-column-calibrationDue, td.mat-column-status { white-space: nowrap; }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

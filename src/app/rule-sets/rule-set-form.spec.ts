@@ -20,7 +20,7 @@ describe('the rule-set editor form', () => {
     form.controls.decisionKind.setValue('non-binary');
     form.controls.guardBandMode.setValue('fixed');
     form.controls.guardBandDb.setValue(1.2);
-    form.controls.values.controls['carrierSuppression.minDbBelowPep'].setValue(45);
+    form.controls.values.controls['carrierSuppression/minDbBelowPep'].setValue(45);
     const body = editedBody(sample.body, form)!;
     expect(body.limits.emissionMask!.vertices.slice(0, 3)).toEqual([[1500, 0], [1500, -25], [4500, -25]]);
     expect(body.decisionRule).toEqual({ kind: 'non-binary', guardBand: 1.2 });

@@ -4,7 +4,7 @@ type Limits = RuleSetBody['limits'];
 
 /** A single number of a rule set's limits that the editor shows as one field. */
 export interface ScalarLimit {
-  /** Stable id: `${limit}.${field}`. */
+  /** Stable id, the field's JSON pointer under limits: `${limit}/${field}` (no dot: Angular form keys cannot hold one). */
   id: string;
   limit: keyof Limits;
   field: string;
@@ -14,7 +14,7 @@ export interface ScalarLimit {
   max: number;
 }
 
-const scalar = (limit: keyof Limits, field: string, label: string, unit: string, min: number, max: number): ScalarLimit => ({ id: `${limit}.${field}`, limit, field, label, unit, min, max });
+const scalar = (limit: keyof Limits, field: string, label: string, unit: string, min: number, max: number): ScalarLimit => ({ id: `${limit}/${field}`, limit, field, label, unit, min, max });
 
 /** The numbers the editor offers, with the schema's bounds (shared/schemas/rule-set.ts). */
 export const SCALAR_LIMITS: readonly ScalarLimit[] = [
@@ -41,7 +41,7 @@ export function presentScalarLimits(body: RuleSetBody): { def: ScalarLimit; valu
 /**
  * A copy of `body` with the given numbers (by ScalarLimit id) and sources (by limit name) written
  * in; limits the body lacks are not created, and `body` itself is not changed. Never throws.
- * @example withScalarLimits(body, { 'carrierSuppression.minDbBelowPep': 45 }, {}).limits.carrierSuppression.minDbBelowPep // 45
+ * @example withScalarLimits(body, { 'carrierSuppression/minDbBelowPep': 45 }, {}).limits.carrierSuppression.minDbBelowPep // 45
  */
 export function withScalarLimits(body: RuleSetBody, values: Record<string, number>, sources: Partial<Record<keyof Limits, string>>): RuleSetBody {
   const limits = JSON.parse(JSON.stringify(body.limits)) as Record<string, Record<string, unknown> | undefined>;
