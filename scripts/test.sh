@@ -29,7 +29,7 @@ status=0
 step() { echo; echo "== $1"; }
 
 step "migrations"
-npx tsx server/db/migrate-cli.ts up || status=1
+npx tsx server/db/migrate-cli.ts up && npx tsx server/mail/prepare-queue-cli.ts || status=1
 
 step "type check"
 npx tsc -p tsconfig.check.json || status=1

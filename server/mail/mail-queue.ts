@@ -10,19 +10,33 @@ import type { Mailer, OutgoingMail } from './mailer';
 export const MAIL_QUEUE = 'mail';
 const MAIL_DEAD_LETTER = 'mail-failed';
 
+async function retryOnDeadlock<T>(fn: () => Promise<T>, attempts = 5): Promise<T> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await fn();
+    } catch (error) {
+      const code = (error as { code?: string }).code;
+      if ((code !== '40P01' && code !== '23505') || attempt >= attempts) throw error;
+      await new Promise((resolve) => setTimeout(resolve, 50 * attempt + Math.random() * 100));
+    }
+  }
+}
+
 export async function startMailQueue(databaseUrl: string, options: { retryDelaySeconds?: number } = {}) {
   const boss = new PgBoss({ connectionString: databaseUrl, application_name: 'sidecheck-jobs', max: 4 });
   boss.on('error', (error) => console.error(JSON.stringify({ level: 'error', msg: 'job queue error', error: String(error) })));
   await boss.start();
-  await boss.createQueue(MAIL_DEAD_LETTER, { name: MAIL_DEAD_LETTER });
-  await boss.createQueue(MAIL_QUEUE, {
+  // Several processes (API servers, parallel test workers) may create the queues at once on a
+  // fresh database; PostgreSQL then aborts one of them with a deadlock, which is safe to retry.
+  await retryOnDeadlock(() => boss.createQueue(MAIL_DEAD_LETTER, { name: MAIL_DEAD_LETTER }));
+  await retryOnDeadlock(() => boss.createQueue(MAIL_QUEUE, {
     name: MAIL_QUEUE,
     retryLimit: 20,
     retryDelay: options.retryDelaySeconds ?? 5,
     retryBackoff: true,
     expireInSeconds: 120,
     deadLetter: MAIL_DEAD_LETTER,
-  });
+  }));
   return boss;
 }
 
