@@ -23,6 +23,7 @@ import type { ReportDeps } from './reports/report-service';
 import { accountRoutes } from './accounts/routes';
 import { apiKeyRoutes } from './api-keys/routes';
 import { auditorRoutes } from './auditors/routes';
+import { organizationRoutes } from './organizations/routes';
 import type { MailSender } from './accounts/account-deps';
 
 export interface RouteTableDeps {
@@ -48,6 +49,7 @@ export function routeTable(deps: RouteTableDeps): RouteDef[] {
     ...accountRoutes(accountDeps),
     ...apiKeyRoutes(),
     ...auditorRoutes(accountDeps),
+    ...organizationRoutes(),
     ...clientRoutes(),
     ...deviceRoutes(),
     ...ruleSetRoutes(),

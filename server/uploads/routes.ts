@@ -2,7 +2,7 @@ import { pipeline } from 'node:stream/promises';
 import { route, type RouteDef } from '../http/route';
 import { badRequest, notFound, Problem } from '../http/problem';
 import { page, readListQuery } from '../http/list-query';
-import { Result, TestRun, Upload } from '../db/models';
+import { Result, RuleSet, TestRun, Upload } from '../db/models';
 import { StorageError } from '../storage/file-storage';
 import { inTenant } from '../tenancy/tenant-transaction';
 import { createUpload } from './create-upload';
@@ -86,6 +86,18 @@ export function uploadRoutes(deps: UploadDeps): RouteDef[] {
           .set('Repr-Digest', `sha-256=:${Buffer.from(sha256, 'hex').toString('base64')}:`); // RFC 9530
         // A client that goes away mid-download just ends the stream; the answer has already started.
         await pipeline(stream, ctx.res).catch(() => ctx.res.destroy());
+      },
+    }),
+    route({
+      method: 'get',
+      path: '/precheck/rule-sets',
+      summary: 'The built-in sample rule sets a manufacturer may run a pre-check against (latest version of each)',
+      access: { kind: 'member', roles: ['manufacturer-admin', 'manufacturer-viewer'] },
+      async handler() {
+        const rows = await RuleSet.findAll({ where: { organizationId: null, isSample: true }, order: [['name', 'ASC'], ['version', 'DESC']] });
+        const latest = new Map<string, RuleSet>();
+        for (const row of rows) if (!latest.has(row.key)) latest.set(row.key, row);
+        return { items: [...latest.values()].map((r) => ({ id: r.id, key: r.key, name: r.name, version: r.version, description: r.body.sampleNotice ?? undefined })) };
       },
     }),
     route({

@@ -40,6 +40,13 @@ describe('ReportsPage actions', () => {
     return { fixture, el: fixture.nativeElement as HTMLElement };
   }
 
+  /** Open the row's menu and pick an item (the menu renders in the CDK overlay, outside the page). */
+  async function choose(fixture: { whenStable(): Promise<unknown> }, el: HTMLElement, item: string) {
+    (el.querySelector('button[aria-label="Correct or withdraw KBRTL-2026-0007"]') as HTMLButtonElement).click();
+    await fixture.whenStable();
+    [...document.querySelectorAll<HTMLButtonElement>('[role="menuitem"]')].find((b) => b.textContent!.includes(item))!.click();
+  }
+
   it('states each revision’s place in the chain', async () => {
     const { el } = await render([row(2, 'current'), row(1, 'superseded')]);
     expect(el.textContent).toContain('Current · replaces rev. 1');
@@ -49,7 +56,7 @@ describe('ReportsPage actions', () => {
   it('withdraws a current report with the reason from the dialog, then reloads', async () => {
     const { fixture, el } = await render([row(1, 'current')]);
     reasons.push('The device under test was not the one registered.');
-    (el.querySelector('button[aria-label="Withdraw KBRTL-2026-0007"]') as HTMLButtonElement).click();
+    await choose(fixture, el, 'Withdraw…');
     const req = http.expectOne({ method: 'POST', url: '/api/reports/rep-1/withdraw' });
     expect(req.request.body).toEqual({ reason: 'The device under test was not the one registered.' });
     req.flush({ ...row(1, 'withdrawn'), reason: 'x', supersededById: null });
@@ -59,10 +66,10 @@ describe('ReportsPage actions', () => {
   });
 
   it('reopens the run for correction and takes the reviewer to it', async () => {
-    const { el } = await render([row(1, 'current')]);
+    const { fixture, el } = await render([row(1, 'current')]);
     const navigate = jest.spyOn(TestBed.inject(Router), 'navigate').mockResolvedValue(true);
     reasons.push('Carrier suppression was read with the wrong RBW.');
-    (el.querySelector('button[aria-label="Correct KBRTL-2026-0007"]') as HTMLButtonElement).click();
+    await choose(fixture, el, 'Correct (reopen for a new revision)…');
     const req = http.expectOne({ method: 'POST', url: '/api/runs/run-9/revise' });
     expect(req.request.body).toEqual({ reason: 'Carrier suppression was read with the wrong RBW.' });
     req.flush({ id: 'run-9', state: 'testing' });
@@ -71,11 +78,10 @@ describe('ReportsPage actions', () => {
 
   it('offers neither action to a manufacturer, nor on a report that is not current', async () => {
     const lab = await render([row(1, 'superseded')]);
-    expect(lab.el.querySelector('button[aria-label^="Withdraw"]')).toBeNull();
+    expect(lab.el.querySelector('button[aria-label^="Correct or withdraw"]')).toBeNull();
     kind = 'manufacturer';
     const maker = await render([row(2, 'current')]);
-    expect(maker.el.querySelector('button[aria-label^="Withdraw"]')).toBeNull();
-    expect(maker.el.querySelector('button[aria-label^="Correct"]')).toBeNull();
+    expect(maker.el.querySelector('button[aria-label^="Correct or withdraw"]')).toBeNull();
     expect(maker.el.querySelector('button[aria-label="PDF of KBRTL-2026-0007"]')).not.toBeNull();
     kind = 'lab';
   });

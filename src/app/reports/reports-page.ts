@@ -10,6 +10,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { MatMenuModule } from '@angular/material/menu';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { ReportsApi, type ReportRow } from './reports-api';
 import { ReasonDialog, type ReasonDialogData } from './reason-dialog';
@@ -20,7 +21,7 @@ import { VerdictChip } from '../ui/verdict-chip';
 
 @Component({
   selector: 'sc-reports-page',
-  imports: [DatePipe, FormsModule, RouterLink, MatTableModule, MatPaginatorModule, MatSortModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, VerdictChip],
+  imports: [DatePipe, FormsModule, RouterLink, MatTableModule, MatPaginatorModule, MatSortModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatMenuModule, MatProgressBarModule, VerdictChip],
   templateUrl: './reports-page.html',
   styleUrl: './reports-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

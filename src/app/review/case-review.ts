@@ -67,11 +67,13 @@ export class CaseReview {
     return typeof n === 'string' && n.trim() ? n : null;
   });
   /** The engine's inputs (from an upload or derived figures), numbers and short texts only. */
-  protected readonly engineInputs = computed(() =>
-    Object.entries(this.shown()?.detail.inputs ?? {})
-      .filter(([, v]) => v === null || ['number', 'string'].includes(typeof v))
-      .map(([key, value]) => ({ label: INPUT_WORDS[key] ?? key, value: value === null ? '—' : typeof value === 'number' ? formatNumber(value) : String(value) })),
-  );
+  protected readonly engineInputs = computed(() => {
+    // Figures already shown as the reading are not repeated.
+    const entered = new Set(READING_FIELDS[this.testCase().kind].map((f) => f.key));
+    return Object.entries(this.shown()?.detail.inputs ?? {})
+      .filter(([key, v]) => !entered.has(key) && (v === null || ['number', 'string'].includes(typeof v)))
+      .map(([key, value]) => ({ label: INPUT_WORDS[key] ?? key, value: value === null ? '—' : typeof value === 'number' ? formatNumber(value) : String(value) }));
+  });
   protected readonly budget = computed(() => this.shown()?.detail.budget ?? []);
   protected readonly instruments = computed(() => this.shown()?.detail.instruments ?? []);
 }

@@ -2,6 +2,8 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import { DecimalPipe } from '@angular/common';
 import { diagnosePhasing, type PhasingDiagnosis as Diagnosis } from '../../../shared/phasing/diagnose-phasing';
 
+let nextId = 0;
+
 /**
  * For an unwanted-sideband suppression that does not pass: the phasing-modulator errors that would
  * explain it and what the design must hold, in plain words (shared/phasing diagnosePhasing, from
@@ -12,10 +14,10 @@ import { diagnosePhasing, type PhasingDiagnosis as Diagnosis } from '../../../sh
   imports: [DecimalPipe],
   template: `
     @if (diagnosis(); as d) {
-      <aside class="phasing" role="note" aria-labelledby="phasing-title">
-        <h3 id="phasing-title">Why the suppression falls short: phasing diagnosis</h3>
+      <aside class="phasing" role="note" [attr.aria-labelledby]="titleId">
+        <h3 [id]="titleId">Why the suppression falls short: phasing diagnosis</h3>
         <p>
-          The unwanted sideband is {{ measured() | number: '1.1-1' }} dB down; {{ required() | number: '1.0-1' }} dB is required.
+          The unwanted sideband is {{ measured() | number: '1.2-2' }} dB down; {{ required() | number: '1.0-1' }} dB is required.
           In a phasing-method exciter that is what either of these alone would give:
         </p>
         <ul>
@@ -46,6 +48,8 @@ export class PhasingDiagnosis {
   readonly measured = input.required<number | null>();
   /** Required suppression (the rule set's limit), dB. */
   readonly required = input.required<number | null>();
+  /** Unique per instance: a page can show several diagnoses. */
+  protected readonly titleId = `phasing-title-${nextId++}`;
 
   protected readonly diagnosis = computed<Diagnosis | null>(() => {
     const measured = this.measured();

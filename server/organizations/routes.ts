@@ -1,0 +1,47 @@
+import { Organization } from '../db/models';
+import { route, type RouteDef } from '../http/route';
+import { notFound } from '../http/problem';
+import { audit } from '../audit/audit';
+import { organizationDetailsSchema, type OrganizationDetailsBody } from '../../shared/schemas/organization';
+import { ROLES } from '../../shared/access/roles';
+
+/** The organization's own record; the code is fixed, since issued report numbers carry it. */
+export function presentOrganization(o: Organization) {
+  return { id: o.id, kind: o.kind, name: o.name, code: o.code, addressLines: o.addressLines, email: o.email, phone: o.phone, accreditation: o.accreditation };
+}
+
+/**
+ * GET/PUT /organization: the active organization's details (ISO/IEC 17025:2017 7.8.2.1 b: the
+ * laboratory's name and address on every report). Reports already issued keep the details they
+ * were rendered with; only reports issued after a change show the new ones.
+ */
+export function organizationRoutes(): RouteDef[] {
+  return [
+    route({
+      method: 'get',
+      path: '/organization',
+      summary: 'The active organization’s details (name, code, address, contact, accreditation)',
+      access: { kind: 'member', roles: ROLES },
+      async handler(ctx) {
+        const org = await Organization.findByPk(ctx.organizationId!);
+        if (!org) throw notFound('The organization');
+        return presentOrganization(org);
+      },
+    }),
+    route<OrganizationDetailsBody>({
+      method: 'put',
+      path: '/organization',
+      summary: 'Change the active organization’s details printed on reports and receipts (the code stays fixed); audited with before and after',
+      access: { kind: 'member', roles: ['lab-admin', 'manufacturer-admin'] },
+      bodySchema: organizationDetailsSchema,
+      async handler(ctx) {
+        const org = await Organization.findByPk(ctx.organizationId!, { lock: true });
+        if (!org) throw notFound('The organization');
+        const before = presentOrganization(org);
+        await org.update({ name: ctx.body.name.trim(), addressLines: ctx.body.addressLines.map((l) => l.trim()), email: ctx.body.email, phone: ctx.body.phone, accreditation: ctx.body.accreditation });
+        await audit(ctx, { action: 'update', entity: 'organization', entityId: org.id, before, after: presentOrganization(org) });
+        return presentOrganization(org);
+      },
+    }),
+  ];
+}
