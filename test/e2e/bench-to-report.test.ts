@@ -9,6 +9,7 @@ import { createSequelize } from '../../server/db/sequelize';
 import { initModels } from '../../server/db/models';
 import { seedDemo } from '../../server/demo/seed';
 import { DEMO_PASSWORD } from '../../server/demo/demo-scenario';
+import { seriousAccessibilityViolations } from '../support/accessibility';
 import { openBrowser, type Browser } from '../support/browser';
 import { startNode, waitForHttp, type Started } from '../support/processes';
 import { testDatabaseUrl } from '../support/test-app';
@@ -72,6 +73,15 @@ async function signOut(page: Page) {
   await page.getByRole('heading', { name: 'Sign in' }).waitFor();
 }
 
+const accessibilityProblems: { screen: string; violations: string[] }[] = [];
+
+/** A screenshot of the screen, then axe-core on it; problems are checked at the end, all screens at once. */
+async function check(page: Page, name: string): Promise<void> {
+  await b.screenshot(name);
+  const violations = await seriousAccessibilityViolations(page);
+  if (violations.length) accessibilityProblems.push({ screen: name, violations });
+}
+
 async function choose(page: Page, label: string, option: string | RegExp) {
   await page.getByRole('combobox', { name: label }).click();
   await page.getByRole('option', { name: option }).click();
@@ -80,7 +90,7 @@ async function choose(page: Page, label: string, option: string | RegExp) {
 test('engineer measures, reviewer authorizes and issues, the client is told, anyone can verify', async () => {
   const page = b.page;
   await page.goto(`${BASE}/sign-in`);
-  await b.screenshot('01-sign-in');
+  await check(page, '01-sign-in');
   await signInAs(page, ENGINEER);
   const roboto = await page.evaluate(async () => {
     await document.fonts.ready;
@@ -88,7 +98,12 @@ test('engineer measures, reviewer authorizes and issues, the client is told, any
   });
   expect(roboto).toBe(true);
   await page.getByText('Tomasz Ellery').waitFor();
-  await b.screenshot('02-bench-board');
+  await check(page, '02-bench-board');
+  await page.getByRole('link', { name: 'Devices' }).first().click();
+  await page.getByRole('heading', { name: 'Devices under test' }).waitFor();
+  await check(page, '02b-devices');
+  await page.getByRole('link', { name: 'Bench board' }).first().click();
+  await page.getByText('Tomasz Ellery').waitFor();
 
   // Register a device.
   await page.getByRole('link', { name: 'Register a device' }).first().click();
@@ -97,13 +112,13 @@ test('engineer measures, reviewer authorizes and issues, the client is told, any
   await page.getByLabel('Model').fill('Halyard HX-90 compact HF set');
   await page.getByLabel('Serial number').fill('HX90-E2E-001');
   await page.getByLabel('Rated PEP').fill('125');
-  await b.screenshot('03-device-form');
+  await check(page, '03-device-form');
   await page.getByRole('button', { name: 'Save and build a plan' }).click();
 
   // Build a plan with one carrier-suppression point; the maritime sample rule set is preselected.
   await page.getByRole('heading', { name: 'Build a test plan' }).waitFor();
   await page.getByText('Sample rule set shipped with Sidecheck').waitFor();
-  await b.screenshot('04-plan-form');
+  await check(page, '04-plan-form');
   await page.getByRole('button', { name: 'Save plan and start a run' }).click();
 
   // The run workspace: type readings and see the verdict computed in the browser.
@@ -121,7 +136,7 @@ test('engineer measures, reviewer authorizes and issues, the client is told, any
   await page.getByLabel('Carrier level').fill('8.2');
   await page.getByRole('button', { name: 'Save reading' }).click();
   await page.getByText(/Stored by the server \(engine \d+\.\d+\.\d+\): 42\.80 dB below PEP/).waitFor();
-  await b.screenshot('05-run-workspace');
+  await check(page, '05-run-workspace');
   const runHeading = await page.getByRole('heading', { name: /RUN-\d+/ }).textContent();
   const runNumber = runHeading!.match(/RUN-\d+/)![0];
   await page.getByRole('button', { name: 'Send for review' }).click();
@@ -135,14 +150,14 @@ test('engineer measures, reviewer authorizes and issues, the client is told, any
   await page.getByText('Results authorized.').waitFor();
   await page.getByRole('button', { name: 'Issue signed report' }).click();
   await page.getByText('Report issued and signed.').waitFor({ timeout: 30_000 });
-  await b.screenshot('06-issued');
+  await check(page, '06-issued');
   await page.getByRole('link', { name: 'See issued reports' }).click();
   const row = page.getByRole('row', { name: /Halyard HX-90/ });
   await row.waitFor();
   await expect(row.getByText('Current').isVisible()).resolves.toBe(true);
   const reportNumber = (await row.locator('strong').textContent())!.trim();
   expect(reportNumber).toMatch(/^KBRTL-\d{4}-\d{4}$/);
-  await b.screenshot('07-reports');
+  await check(page, '07-reports');
 
   // The client's contact got the e-mail, through the queue and the SMTP stand-in.
   let message: { subject: string; text: string; attachments: { filename: string }[] } | undefined;
@@ -162,7 +177,11 @@ test('engineer measures, reviewer authorizes and issues, the client is told, any
   await page.goto(verifyUrl);
   await page.getByText('Authentic and current.').waitFor();
   await page.getByRole('heading', { name: new RegExp(reportNumber) }).waitFor();
-  await b.screenshot('08-verify');
+  await check(page, '08-verify');
 
   expect(b.outsideRequests).toEqual([]);
+});
+
+test('no serious or critical accessibility violation on any screen of the path (axe-core)', () => {
+  expect(accessibilityProblems).toEqual([]);
 });

@@ -12,6 +12,7 @@ import { createSequelize } from '../../server/db/sequelize';
 import { initModels } from '../../server/db/models';
 import { seedDemo } from '../../server/demo/seed';
 import { DEMO_PASSWORD } from '../../server/demo/demo-scenario';
+import { seriousAccessibilityViolations } from '../support/accessibility';
 import { openBrowser, type Browser } from '../support/browser';
 import { ROOT, startNode, waitForHttp, type Started } from '../support/processes';
 import { testDatabaseUrl } from '../support/test-app';
@@ -28,8 +29,6 @@ const RUN = Date.now().toString(36);
 const INVITEE = `nadia.brennan.${RUN}@kestrelbay.example`;
 const INVITEE_PASSWORD = 'bench seven 4 calibrated';
 const NEW_PASSWORD = 'harbour light 9 reset';
-// The app's CSP refuses inline scripts, so axe is evaluated through the DevTools protocol instead.
-const AXE_SOURCE = fs.readFileSync(path.join(ROOT, 'node_modules', 'axe-core', 'axe.min.js'), 'utf8');
 
 const accessibilityProblems: { screen: string; violations: string[] }[] = [];
 
@@ -74,12 +73,7 @@ afterAll(async () => {
 async function check(page: Page, name: string): Promise<void> {
   await page.waitForLoadState('networkidle');
   await b.screenshot(`lab-${name}`);
-  await page.evaluate(`${AXE_SOURCE}\n;true`);
-  const violations = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run(context: Document, options: object): Promise<{ violations: { id: string; impact: string | null; nodes: { target: string[] }[] }[] }> } }).axe;
-    const result = await axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] } });
-    return result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
-  });
+  const violations = await seriousAccessibilityViolations(page);
   // Collected and checked at the end, so one run reports every screen's violations at once.
   if (violations.length) accessibilityProblems.push({ screen: name, violations });
 }

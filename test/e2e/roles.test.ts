@@ -18,6 +18,7 @@ import { seedDemo } from '../../server/demo/seed';
 import { DEMO_LAB, DEMO_PASSWORD } from '../../server/demo/demo-scenario';
 import { hashPassword } from '../../server/auth/password';
 import { asSystem } from '../../server/tenancy/tenant-transaction';
+import { seriousAccessibilityViolations } from '../support/accessibility';
 import { openBrowser, type Browser } from '../support/browser';
 import { ROOT, startNode, waitForHttp, type Started } from '../support/processes';
 import { testDatabaseUrl } from '../support/test-app';
@@ -31,7 +32,6 @@ const ENGINEER = 'tomasz.ellery@kestrelbay.example';
 const REVIEWER = 'priya.castellanos@kestrelbay.example';
 const MAKER = 'delphine.okafor@halyard-radio.example';
 const AUDITOR = `auditor-${Date.now()}@assessor.example`;
-const AXE_SOURCE = fs.readFileSync(path.join(ROOT, 'node_modules', 'axe-core', 'axe.min.js'), 'utf8');
 
 let server: Started;
 let fakes: Started;
@@ -80,13 +80,7 @@ async function api(email: string) {
 /** A screenshot of the screen, then axe-core on it: nothing serious or critical. */
 async function check(page: Page, name: string): Promise<void> {
   await b.screenshot(name);
-  // The app's CSP refuses inline scripts (addScriptTag); evaluating through the DevTools protocol is not subject to it.
-  if (!(await page.evaluate(() => 'axe' in window))) await page.evaluate(AXE_SOURCE);
-  const violations = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run(ctx: Document, o: object): Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }> } }).axe;
-    const result = await axe.run(document, { resultTypes: ['violations'] });
-    return result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
-  });
+  const violations = await seriousAccessibilityViolations(page);
   expect({ screen: name, violations }).toEqual({ screen: name, violations: [] });
 }
 
