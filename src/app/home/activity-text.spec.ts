@@ -7,7 +7,10 @@ describe('activityText', () => {
     [{ who: { displayName: 'Imogen Varga' }, action: 'create', entity: 'instrument' }, 'Imogen Varga added an instrument to the register'],
     [{ who: { displayName: null }, action: 'new-version', entity: 'rule-set' }, 'Someone saved a new version of a rule set'],
     [{ who: null, action: 'run-issue', entity: 'test-run' }, 'Sidecheck issued a report'],
-    [{ who: { displayName: 'A' }, action: 'price-list-save', entity: 'credit-price-list' }, 'A price list save (credit price list)'],
+    [{ who: { displayName: 'A' }, action: 'price-list-save', entity: 'credit-price-list' }, 'A saved the credit price list'],
+    [{ who: null, action: 'credit-purchase-complete', entity: 'credit-purchase' }, 'Sidecheck recorded a paid credit purchase'],
+    // An action the client has no words for yet is still shown, from its own name.
+    [{ who: { displayName: 'A' }, action: 'future-thing', entity: 'some-entity' }, 'A future thing (some entity)'],
   ])('%j', (entry, expected) => {
     expect(activityText(entry, 'someone-else')).toBe(expected);
   });

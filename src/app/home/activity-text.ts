@@ -32,6 +32,17 @@ const PHRASES: Record<string, string> = {
   'revoke auditor-grant': 'revoked an auditor’s access',
   'sign-up organization': 'signed the lab up',
   'upload upload': 'uploaded a trace',
+  'client-organization-create client': 'invited a client’s first administrator',
+  'credit-adjust client': 'adjusted a client’s report credits',
+  'credit-checkout credit-purchase': 'started a credit purchase',
+  'credit-consume client': 'used a client’s report credit for a report',
+  'credit-purchase-complete credit-purchase': 'recorded a paid credit purchase',
+  'credit-refund client': 'returned a report credit to a client',
+  'price-list-save credit-price-list': 'saved the credit price list',
+  'update organization': 'changed the lab details printed on reports',
+  'mail-settings-update organization': 'changed the e-mail settings',
+  'password-reset user': 'reset a password',
+  'password-reset-request user': 'asked for a password reset',
 };
 
 /**
