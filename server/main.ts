@@ -7,6 +7,7 @@ import { buildApp } from './app';
 import { createMailer } from './mail/mailer';
 import { enqueueMail, startMailQueue, startMailWorker } from './mail/mail-queue';
 import { createPaymentClient } from './billing/payment-client';
+import { startCalibrationDueJob } from './instruments/calibration-due-job';
 
 async function main() {
   const config = loadConfig();
@@ -17,6 +18,7 @@ async function main() {
   if (pending.length) throw new Error(`database has ${pending.length} pending migration(s): run npm run db:migrate`);
   const boss = await startMailQueue(config.databaseUrl);
   await startMailWorker(boss, createMailer(config.smtp));
+  await startCalibrationDueJob(boss, { sequelize, publicUrl: config.publicUrl, enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail) });
   const app = buildApp({
     sequelize,
     tokens: { secret: config.jwtSecret, accessTtlSeconds: config.accessTokenTtlSeconds, refreshTtlSeconds: config.refreshTokenTtlSeconds },

@@ -56,7 +56,7 @@ export function routeTable(deps: RouteTableDeps): RouteDef[] {
     ...instrumentRoutes(),
     ...homeRoutes(deps.sequelize),
     ...planRoutes(),
-    ...runRoutes(deps.sequelize),
+    ...runRoutes(deps.sequelize, { publicUrl: deps.publicUrl, mail: deps.mail }),
     ...uploadRoutes(deps.uploads ?? uploadDepsFromEnv(deps.sequelize)),
     ...commentRoutes(),
     ...reportRoutes(deps.reports),

@@ -7,9 +7,10 @@ import { migration as billing } from './migrations/0004-billing';
 import { migration as uploads } from './migrations/0005-uploads';
 import { migration as comments } from './migrations/0006-comments';
 import { migration as certificates } from './migrations/0007-certificates';
+import { migration as calibrationNotices } from './migrations/0008-calibration-notices';
 
 /** Every migration, in order. Add a new file under migrations/ and append it here. */
-const MIGRATIONS = [foundation, accounts, equipment, billing, uploads, comments, certificates];
+const MIGRATIONS = [foundation, accounts, equipment, billing, uploads, comments, certificates, calibrationNotices];
 
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({

@@ -10,7 +10,8 @@ import type { Mailer, OutgoingMail } from './mailer';
 export const MAIL_QUEUE = 'mail';
 const MAIL_DEAD_LETTER = 'mail-failed';
 
-async function retryOnDeadlock<T>(fn: () => Promise<T>, attempts = 5): Promise<T> {
+/** Retry `fn` when PostgreSQL aborts it with a deadlock or a duplicate (queue creation racing another process). */
+export async function retryOnDeadlock<T>(fn: () => Promise<T>, attempts = 5): Promise<T> {
   for (let attempt = 1; ; attempt++) {
     try {
       return await fn();

@@ -2,7 +2,7 @@ import { Organization } from '../db/models';
 import { route, type RouteDef } from '../http/route';
 import { notFound } from '../http/problem';
 import { audit } from '../audit/audit';
-import { organizationDetailsSchema, type OrganizationDetailsBody } from '../../shared/schemas/organization';
+import { mailSettingsSchema, organizationDetailsSchema, type MailSettingsBody, type OrganizationDetailsBody } from '../../shared/schemas/organization';
 import { ROLES } from '../../shared/access/roles';
 
 /** The organization's own record; the code is fixed, since issued report numbers carry it. */
@@ -41,6 +41,25 @@ export function organizationRoutes(): RouteDef[] {
         await org.update({ name: ctx.body.name.trim(), addressLines: ctx.body.addressLines.map((l) => l.trim()), email: ctx.body.email, phone: ctx.body.phone, accreditation: ctx.body.accreditation });
         await audit(ctx, { action: 'update', entity: 'organization', entityId: org.id, before, after: presentOrganization(org) });
         return presentOrganization(org);
+      },
+    }),
+    route<MailSettingsBody>({
+      method: 'put',
+      path: '/organization/mail-settings',
+      summary: 'Choose whether the report-issued e-mail carries the signed PDF (organizations.settings.attachPdfToEmail); audited',
+      access: { kind: 'member', roles: ['lab-admin'] },
+      bodySchema: mailSettingsSchema,
+      async handler(ctx) {
+        const org = await Organization.findByPk(ctx.organizationId!, { lock: true });
+        if (!org) throw notFound('The organization');
+        const settings = org.settings as Record<string, unknown>;
+        const before = { attachPdfToEmail: settings.attachPdfToEmail === true };
+        // A new object, so Sequelize sees the JSON column change; other settings are kept.
+        await org.update({ settings: { ...settings, attachPdfToEmail: ctx.body.attachPdfToEmail } });
+        const after = { attachPdfToEmail: ctx.body.attachPdfToEmail };
+        await audit(ctx, { action: 'mail-settings-update', entity: 'organization', entityId: org.id, before, after });
+        ctx.status(200);
+        return after;
       },
     }),
   ];

@@ -7,11 +7,14 @@ import { RUN_STATES, type RunAction } from '../../shared/runs/run-state';
 import { createRun, loadRun, runDetail, saveReading, transition } from './run-service';
 import { runInstrumentsSchema, type RunInstrumentsBody } from '../../shared/schemas/instruments';
 import { setRunInstruments } from '../instruments/run-instruments';
+import { mailReturnedForRework, mailReviewRequested, type RunMailDeps } from './run-mail';
 
 const LAB = ['lab-admin', 'engineer', 'reviewer', 'billing'] as const;
 const SORT_COLUMNS: Record<string, string> = { number: 'r.number', state: 'r.state', updatedAt: 'r.updated_at', createdAt: 'r.created_at', model: 'd.model', client: 'c.name' };
 
-export function runRoutes(sequelize: Sequelize): RouteDef[] {
+/** `mail` sends the review step's e-mails (run-mail.ts) in the request's transaction. */
+export function runRoutes(sequelize: Sequelize, mail: Omit<RunMailDeps, 'sequelize'>): RouteDef[] {
+  const mailDeps: RunMailDeps = { sequelize, ...mail };
   const act = (action: RunAction, roles: readonly ('lab-admin' | 'engineer' | 'reviewer')[], summary: string, withReason = false): RouteDef =>
     route<{ reason?: string }>({
       method: 'post',
@@ -22,6 +25,8 @@ export function runRoutes(sequelize: Sequelize): RouteDef[] {
       async handler(ctx) {
         ctx.status(200);
         const run = await transition(ctx, await loadRun(ctx.params.id), action, ctx.body?.reason);
+        if (action === 'submit') await mailReviewRequested(mailDeps, ctx, run);
+        if (action === 'return') await mailReturnedForRework(mailDeps, ctx, run, ctx.body!.reason!);
         return runDetail(run);
       },
     });

@@ -21,3 +21,16 @@ export const organizationDetailsSchema = {
     accreditation: { anyOf: [text(200), { type: 'null' }] },
   },
 } as const;
+
+/** PUT /api/organization/mail-settings: a lab's choices for the e-mails it sends its clients. */
+export interface MailSettingsBody {
+  /** Attach the signed report PDF to the report-issued e-mail (otherwise the e-mail links to it). */
+  attachPdfToEmail: boolean;
+}
+
+export const mailSettingsSchema = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['attachPdfToEmail'],
+  properties: { attachPdfToEmail: { type: 'boolean' } },
+} as const;
