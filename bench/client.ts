@@ -95,7 +95,7 @@ function drawInPage(args: { points: number; draws: number }): { firstMs: number;
   return { firstMs, drawsMs };
 }
 
-async function drawFigures() {
+async function drawFigures(points = POINTS, draws = DRAWS) {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sidecheck-bench-client-'));
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -111,7 +111,7 @@ async function drawFigures() {
     // tsx compiles with esbuild's keepNames, which wraps named functions in a __name() helper that
     // the page does not have: give it an identity one before sending drawInPage across.
     await page.evaluate('globalThis.__name = (fn) => fn');
-    const { firstMs, drawsMs } = await page.evaluate(drawInPage, { points: POINTS, draws: DRAWS });
+    const { firstMs, drawsMs } = await page.evaluate(drawInPage, { points, draws });
     const sorted = [...drawsMs].sort((a, b) => a - b);
     return { firstMs, medianMs: sorted[Math.floor(sorted.length / 2)], worstMs: sorted[sorted.length - 1] };
   } finally {
@@ -130,7 +130,13 @@ async function main(): Promise<void> {
   console.log(`Spectrum chart, ${POINTS.toLocaleString('en-GB')} points + mask line, headless Chromium (software rendering):`);
   console.log(`  first chart (create + draw) ${draw.firstMs.toFixed(1)} ms`);
   console.log(`  setData + redraw: median ${draw.medianMs.toFixed(1)} ms, worst ${draw.worstMs.toFixed(1)} ms of ${DRAWS}; target ≤ ${TARGET_DRAW_MS} ms`);
-  console.log(JSON.stringify({ bench: 'client', initialTransferKb: Number(kb(bundle.gzipBytes)), targetTransferKb: TARGET_TRANSFER_KB, drawPoints: POINTS, firstDrawMs: Number(draw.firstMs.toFixed(1)), drawMedianMs: Number(draw.medianMs.toFixed(1)), drawWorstMs: Number(draw.worstMs.toFixed(1)), targetDrawMs: TARGET_DRAW_MS }));
+  // How drawing grows with the trace: 10,000 (1x), 100,000 (10x, the target) and 1,000,000 points (100x).
+  const growth: { points: number; medianMs: number }[] = [];
+  for (const points of process.argv.includes('--quick') ? [10_000, 100_000] : [10_000, 100_000, 1_000_000]) {
+    growth.push({ points, medianMs: Number((await drawFigures(points, 5)).medianMs.toFixed(1)) });
+  }
+  console.log('  growth (setData + redraw, median of 5): ' + growth.map((g) => `${g.points.toLocaleString('en-GB')} points ${g.medianMs} ms`).join(' · '));
+  console.log(JSON.stringify({ growth, bench: 'client', initialTransferKb: Number(kb(bundle.gzipBytes)), targetTransferKb: TARGET_TRANSFER_KB, drawPoints: POINTS, firstDrawMs: Number(draw.firstMs.toFixed(1)), drawMedianMs: Number(draw.medianMs.toFixed(1)), drawWorstMs: Number(draw.worstMs.toFixed(1)), targetDrawMs: TARGET_DRAW_MS }));
 }
 
 main().catch((error: unknown) => {

@@ -22,9 +22,12 @@ const TARGET_FRESH_MS = 1500;
 const PLOTS = 10;
 const POINTS_PER_PLOT = 1000;
 
-/** About 20 A4 pages: front matter, a long results table, a long equipment list, 10 figures. */
-function benchReport(): ReportDocument {
-  const options = { count: 215, plotCount: PLOTS, pointsPerPlot: POINTS_PER_PLOT };
+/**
+ * About 20 A4 pages at scale 10 (the targets' size): front matter, a long results table, a long
+ * equipment list, 10 figures. Scale 1 and 100 give a tenth and ten times the results and figures.
+ */
+function benchReport(scale = 10): ReportDocument {
+  const options = { count: Math.round(21.5 * scale), plotCount: Math.max(1, Math.round(scale)), pointsPerPlot: POINTS_PER_PLOT };
   // Only the mask figures count: drop the sample's IMD figure.
   const results = buildSampleResults(options).map((r) =>
     r.testName === 'Two-tone intermodulation' ? { ...r, plot: undefined } : r,
@@ -103,6 +106,21 @@ async function main(): Promise<void> {
       ` first generation + signature ${ms(freshFirstRun)}; wall incl. spawn ${ms(wallMs)}`,
   ];
   for (const line of lines) console.log(line);
+
+  // How it grows: 1x = 22 results and 1 figure; 10x is the target report above; 100x ten times that.
+  const growth: { scale: string; pages: number; ms: number }[] = [];
+  for (const scale of quick ? [1, 10] : [1, 10, 100]) {
+    const doc = benchReport(scale);
+    const times = [];
+    let pageCount = 0;
+    for (let i = 0; i < (scale >= 100 ? 1 : 3); i++) {
+      const r = await generateAndSign(doc, identity);
+      times.push(r.totalMs);
+      pageCount = r.pageCount;
+    }
+    growth.push({ scale: `${scale}x`, pages: pageCount, ms: Math.round(median(times)) });
+  }
+  console.log('  growth (generation + signature, warm): ' + growth.map((g) => `${g.scale} ${g.pages} pages ${g.ms} ms`).join(' · '));
   console.log(
     JSON.stringify({
       bench: 'report-pdf',
@@ -117,6 +135,7 @@ async function main(): Promise<void> {
       freshFirstRunMs: Math.round(freshFirstRun),
       targets: { warmMs: TARGET_WARM_MS, freshMs: TARGET_FRESH_MS },
       withinTargets: { warm: warmTotal <= TARGET_WARM_MS, fresh: fresh <= TARGET_FRESH_MS },
+      growth,
     }),
   );
 }
