@@ -16,28 +16,29 @@ async function main() {
   await sequelize.authenticate();
   const pending = await createMigrator(sequelize).pending();
   if (pending.length) throw new Error(`database has ${pending.length} pending migration(s): run npm run db:migrate`);
-  const boss = await startMailQueue(config.databaseUrl);
+  const boss = await startMailQueue(config.databaseUrl, { retryDelaySeconds: config.smtp.retryDelaySeconds });
   await startMailWorker(boss, createMailer(config.smtp));
-  await startCalibrationDueJob(boss, { sequelize, publicUrl: config.publicUrl, enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail) });
+  const mailRetry = { retryDelaySeconds: config.smtp.retryDelaySeconds };
+  await startCalibrationDueJob(boss, { sequelize, publicUrl: config.publicUrl, enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail, mailRetry) });
   const app = buildApp({
     sequelize,
     tokens: { secret: config.jwtSecret, accessTtlSeconds: config.accessTokenTtlSeconds, refreshTtlSeconds: config.refreshTokenTtlSeconds },
     secureCookies: config.secureCookies,
     clientDistDir: config.clientDistDir,
     publicUrl: config.publicUrl,
-    mail: { enqueue: (transaction, mail) => enqueueMail(boss, transaction, mail) },
+    mail: { enqueue: (transaction, mail) => enqueueMail(boss, transaction, mail, mailRetry) },
     reports: {
       sequelize,
       publicUrl: config.publicUrl,
       keyEncryptionSecret: config.keyEncryptionSecret,
-      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
+      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail, mailRetry),
     },
     billing: {
       sequelize,
       payments: createPaymentClient(config.payments),
       webhookSecret: config.payments.webhookSecret,
       publicUrl: config.publicUrl,
-      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
+      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail, mailRetry),
     },
   });
   const server = app.listen(config.port, config.host, () => {

@@ -16,7 +16,8 @@ export interface Config {
   accessTokenTtlSeconds: number;
   refreshTokenTtlSeconds: number;
   keyEncryptionSecret: string;
-  smtp: { host: string; port: number; from: string };
+  /** `retryDelaySeconds`: first delay before a failed e-mail is tried again (doubling after each failure, pg-boss backoff). */
+  smtp: { host: string; port: number; from: string; retryDelaySeconds?: number };
   payments: { secretKey: string; host: string; port: number; protocol: 'http' | 'https'; webhookSecret: string };
   clientDistDir: string;
   secureCookies: boolean;
@@ -60,6 +61,7 @@ export function loadConfig(): Config {
       host: process.env.SMTP_HOST ?? '127.0.0.1',
       port: integer('SMTP_PORT', 4625),
       from: process.env.MAIL_FROM ?? 'Sidecheck <no-reply@sidecheck.test>',
+      retryDelaySeconds: integer('SIDECHECK_MAIL_RETRY_DELAY_SECONDS', 5),
     },
     payments: {
       secretKey: required('PAYMENTS_SECRET_KEY', devSecret('payments') && 'sk_test_sidecheck_local'),

@@ -41,13 +41,18 @@ export async function startMailQueue(databaseUrl: string, options: { retryDelayS
   return boss;
 }
 
-/** Enqueue within a Sequelize transaction, so the mail exists exactly when the change commits. */
-export async function enqueueMail(boss: PgBoss, transaction: Transaction | null, mail: OutgoingMail): Promise<void> {
+/**
+ * Enqueue within a Sequelize transaction, so the mail exists exactly when the change commits.
+ * `retryDelaySeconds` sets the job's first retry delay (the queue's, 5 s, when absent); a job's
+ * own setting wins over the queue's, so it applies to a queue created earlier too.
+ */
+export async function enqueueMail(boss: PgBoss, transaction: Transaction | null, mail: OutgoingMail, options: { retryDelaySeconds?: number } = {}): Promise<void> {
   // pg-boss runs its INSERT on the transaction's own connection (pg's numbered parameters go to
   // pg unchanged), so the job commits or rolls back with the change that caused it.
   const connection = (transaction as unknown as { connection?: { query(text: string, values: unknown[]): Promise<{ rows: unknown[] }> } } | null)?.connection;
   const db = connection ? { executeSql: (text: string, values: unknown[]) => connection.query(text, values) } : undefined;
-  await boss.send(MAIL_QUEUE, mail as unknown as object, db ? { db } : {});
+  const retry = options.retryDelaySeconds === undefined ? {} : { retryDelay: options.retryDelaySeconds };
+  await boss.send(MAIL_QUEUE, mail as unknown as object, { ...retry, ...(db ? { db } : {}) });
 }
 
 export async function startMailWorker(boss: PgBoss, mailer: Mailer): Promise<string> {
