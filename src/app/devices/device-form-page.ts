@@ -18,7 +18,8 @@ function designator(control: AbstractControl): ValidationErrors | null {
     parseEmissionDesignator(String(control.value).toUpperCase());
     return null;
   } catch (error) {
-    return { designator: (error as Error).message };
+    // The engine's message starts with its function's name, which means nothing to the person typing.
+    return { designator: (error as Error).message.replace(/^parseEmissionDesignator: /, '') };
   }
 }
 
