@@ -30,6 +30,7 @@ export const routes: Routes = [
       { path: 'portal/precheck', loadComponent: () => import('./portal/precheck-page').then((m) => m.PrecheckPage), canActivate: [roleGuard(MANUFACTURER)], title: 'Engineering pre-check · Sidecheck' },
       // The payment provider returns buyers here (server/billing/start-checkout.ts).
       { path: 'billing', loadComponent: () => import('./portal/credits-page').then((m) => m.CreditsPage), canActivate: [roleGuard(MANUFACTURER)], title: 'Report credits · Sidecheck' },
+      { path: 'sales', loadComponent: () => import('./billing/lab-billing-page').then((m) => m.LabBillingPage), canActivate: [roleGuard(['lab-admin', 'billing'])], title: 'Sales and credits · Sidecheck' },
       { path: 'devices/:id/edit', loadComponent: () => import('./devices/device-form-page').then((m) => m.DeviceFormPage), canActivate: [roleGuard(SCREEN_ROLES.labRecordsWrite)], title: 'Change device · Sidecheck' },
       { path: 'clients', loadComponent: () => import('./clients/clients-page').then((m) => m.ClientsPage), canActivate: [roleGuard(SCREEN_ROLES.labRecords)], title: 'Clients · Sidecheck' },
       { path: 'clients/new', loadComponent: () => import('./clients/client-form-page').then((m) => m.ClientFormPage), canActivate: [roleGuard(SCREEN_ROLES.labRecordsWrite)], title: 'Add a client · Sidecheck' },

@@ -25,6 +25,7 @@ const NAV: NavItem[] = [
   { path: '/clients', label: 'Clients', icon: 'groups', roles: [...SCREEN_ROLES.labRecords] },
   { path: '/equipment', label: 'Equipment', icon: 'speed', roles: [...SCREEN_ROLES.labRecords] },
   { path: '/rule-sets', label: 'Rule sets', icon: 'rule', roles: [...SCREEN_ROLES.labRecords] },
+  { path: '/sales', label: 'Sales', icon: 'point_of_sale', roles: ['lab-admin', 'billing'] },
   { path: '/reports', label: 'Reports', icon: 'verified', roles: ['lab-admin', 'engineer', 'reviewer', 'billing', 'manufacturer-admin', 'manufacturer-viewer'] },
   { path: '/portal', label: 'Our devices', icon: 'inventory_2', roles: ['manufacturer-admin', 'manufacturer-viewer'], exact: true },
   { path: '/billing', label: 'Credits', icon: 'toll', roles: ['manufacturer-admin', 'manufacturer-viewer'] },
