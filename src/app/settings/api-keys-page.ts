@@ -42,6 +42,7 @@ export class ApiKeysPage {
 
   load(): void {
     this.loading.set(true);
+    this.error.set(null);
     this.api.list().subscribe({
       next: (page) => {
         this.keys.set(page.items);

@@ -46,9 +46,10 @@ export class PeoplePage {
     this.load();
   }
 
-  load(): void {
+  /** Read members and invitations again; `keepError` leaves a refusal just shown on screen. */
+  load(keepError = false): void {
     this.loading.set(true);
-    this.error.set(null);
+    if (!keepError) this.error.set(null);
     this.api.members().subscribe({
       next: (page) => {
         this.members.set(page.items);
@@ -86,7 +87,7 @@ export class PeoplePage {
   saveRoles(member: Member, roles: Role[]): void {
     if (roles.length === 0) {
       this.error.set(`Everyone keeps at least one role. To take ${member.name} out of the organization, remove them instead.`);
-      this.load();
+      this.load(true);
       return;
     }
     if ([...roles].sort().join() === [...member.roles].sort().join()) return;
@@ -98,7 +99,7 @@ export class PeoplePage {
       },
       error: (error) => {
         this.error.set(problemMessage(error));
-        this.load();
+        this.load(true);
       },
     });
   }

@@ -1,0 +1,105 @@
+import { TestBed } from '@angular/core/testing';
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { provideRouter } from '@angular/router';
+import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
+import { LabDetailsPage } from './lab-details-page';
+import type { LabDetails } from './lab-details-api';
+import { alerts, buttonNamed, errorsOf, inputLabelled, problem, submit, textOf } from '../testing/page-testing';
+
+// The first render compiles Angular Material's templates, which can take seconds on a cold run.
+jest.setTimeout(20_000);
+
+// An invented lab (test fixture).
+const lab: LabDetails = { name: 'Kestrel Bay Radio Test Laboratory', code: 'KBRTL', addressLines: ['Unit 4, Quay Road', 'Portsmouth PO1 3AB'], email: 'lab@kestrel.example', phone: null, accreditation: 'Accreditation body 0000' };
+
+describe('LabDetailsPage', () => {
+  let http: HttpTestingController;
+
+  beforeEach(() => {
+    TestBed.configureTestingModule({ providers: [provideRouter([]), provideHttpClient(), provideHttpClientTesting()] });
+    http = TestBed.inject(HttpTestingController);
+  });
+  afterEach(() => http.verify());
+
+  async function render() {
+    const fixture = TestBed.createComponent(LabDetailsPage);
+    await fixture.whenStable();
+    const el = fixture.nativeElement as HTMLElement;
+    return { fixture, el, loader: TestbedHarnessEnvironment.loader(fixture), save: () => el.querySelector<HTMLButtonElement>('button[type="submit"]')! };
+  }
+
+  it('loads the details into the form and names the fixed lab code', async () => {
+    const { fixture, el, loader, save } = await render();
+    expect(el.querySelector('mat-progress-bar[aria-label="Loading the lab details"]')).not.toBeNull();
+    expect(save().disabled).toBe(true);
+    http.expectOne({ method: 'GET', url: '/api/organization' }).flush(lab);
+    await fixture.whenStable();
+    expect(await (await inputLabelled(loader, 'Lab name')).getValue()).toBe('Kestrel Bay Radio Test Laboratory');
+    expect(await (await inputLabelled(loader, 'Postal address')).getValue()).toBe('Unit 4, Quay Road\nPortsmouth PO1 3AB');
+    expect(await (await inputLabelled(loader, 'Telephone')).getValue()).toBe('');
+    // The product's own wording.
+    expect(textOf(el.querySelector('p.sc-muted'))).toContain('Report numbers start with the lab code KBRTL, which stays fixed.');
+    expect(save().disabled).toBe(false);
+  });
+
+  it('saves trimmed details, empty optional lines as null, and says issued reports keep theirs', async () => {
+    const { fixture, el, loader } = await render();
+    http.expectOne('/api/organization').flush(lab);
+    await fixture.whenStable();
+    await (await inputLabelled(loader, 'Postal address')).setValue(' Unit 4, Quay Road \n\n Portsmouth PO1 3AB\nUnited Kingdom ');
+    await (await inputLabelled(loader, 'Contact e-mail')).setValue('  ');
+    await (await inputLabelled(loader, 'Telephone')).setValue(' +44 23 0000 0000 ');
+    submit(el);
+    const req = http.expectOne({ method: 'PUT', url: '/api/organization' });
+    expect(req.request.body).toEqual({
+      name: 'Kestrel Bay Radio Test Laboratory', addressLines: ['Unit 4, Quay Road', 'Portsmouth PO1 3AB', 'United Kingdom'],
+      email: null, phone: '+44 23 0000 0000', accreditation: 'Accreditation body 0000',
+    });
+    req.flush({ ...lab, addressLines: req.request.body.addressLines });
+    await fixture.whenStable();
+    // The product's own wording.
+    expect(textOf(el.querySelector('[role="status"]'))).toBe('Saved. Reports issued from now on carry these details; reports already issued keep theirs.');
+  });
+
+  it('asks for the name and address ISO/IEC 17025 requires, and a well-formed e-mail', async () => {
+    const { fixture, el, loader } = await render();
+    http.expectOne('/api/organization').flush(lab);
+    await fixture.whenStable();
+    await (await inputLabelled(loader, 'Lab name')).setValue(' ');
+    await (await inputLabelled(loader, 'Postal address')).setValue('');
+    await (await inputLabelled(loader, 'Contact e-mail')).setValue('lab-at-kestrel');
+    submit(el);
+    await fixture.whenStable();
+    // ISO/IEC 17025:2017 7.8.2.1 b (the lab's name and address); messages are the product's own wording.
+    expect(await errorsOf(loader, 'Lab name')).toEqual(['Enter the lab name.']);
+    expect(await errorsOf(loader, 'Postal address')).toEqual(["Enter the lab's address."]);
+    expect(await errorsOf(loader, 'Contact e-mail')).toEqual(['Enter an e-mail address such as lab@example.org.']);
+    http.expectNone({ method: 'PUT' });
+  });
+
+  it('shows the server’s refusal of a save', async () => {
+    const { fixture, el } = await render();
+    http.expectOne('/api/organization').flush(lab);
+    await fixture.whenStable();
+    submit(el);
+    http.expectOne({ method: 'PUT', url: '/api/organization' }).flush(...problem(422, 'An address has at most six lines.'));
+    await fixture.whenStable();
+    expect(alerts(el)[0]).toContain('An address has at most six lines.');
+    expect(el.querySelector('[role="status"]')).toBeNull();
+  });
+
+  it('offers no saving over details it could not read, and reads them again on request', async () => {
+    const { fixture, el, loader, save } = await render();
+    http.expectOne('/api/organization').flush(...problem(503, 'The database is restarting; try again in a minute.'));
+    await fixture.whenStable();
+    expect(alerts(el)[0]).toContain('The database is restarting; try again in a minute.');
+    expect(save().disabled).toBe(true);
+    expect(await (await inputLabelled(loader, 'Lab name')).isDisabled()).toBe(true);
+    buttonNamed(el, 'Try again').click();
+    http.expectOne('/api/organization').flush(lab);
+    await fixture.whenStable();
+    expect(alerts(el)).toEqual([]);
+    expect(save().disabled).toBe(false);
+  });
+});
