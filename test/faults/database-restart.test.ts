@@ -62,7 +62,7 @@ test('requests fail with 503 while PostgreSQL is down and succeed again after it
     ['GET /api/home', () => engineer('GET', '/home', undefined, { timeoutMs: HANG_MS })],
     ['GET /api/health', () => call(server.base, 'GET', '/health', { timeoutMs: HANG_MS })],
   ];
-  // Two clients, each sending one request after another with a 40 ms pause: bounded by `running`.
+  // Four clients, each sending one request after another with a 40 ms pause: bounded by `running`.
   const client = async (offset: number) => {
     for (let i = offset; running; i++) {
       const [route, send] = routes[i % routes.length];
@@ -80,35 +80,42 @@ test('requests fail with 503 while PostgreSQL is down and succeed again after it
       await new Promise((resolve) => setTimeout(resolve, 40));
     }
   };
-  const clients = Promise.all([client(0), client(1)]);
+  const clients = Promise.all([0, 1, 2, 3].map(client));
   const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
   await pause(1000);
-  phase = 'stopping';
-  await cluster.stop();
-  phase = 'down';
-  await pause(3000);
-  phase = 'starting';
-  await cluster.start();
-  phase = 'recovering';
-  const back = Date.now();
-  await waitFor('the API to answer 200 again', async () => (samples.some((x) => x.phase === 'recovering' && x.route === 'GET /api/runs' && x.status === 200) ? true : undefined), 20_000);
-  const recoveryMs = Date.now() - back;
-  phase = 'recovered';
-  await pause(1500);
+  // Two outages: requests caught mid-query by the shutdown are the rare case, so give it two chances.
+  const recoveryMs: number[] = [];
+  for (let outage = 0; outage < 2; outage++) {
+    phase = 'stopping';
+    await cluster.stop();
+    phase = 'down';
+    await pause(2000);
+    phase = 'starting';
+    await cluster.start();
+    const back = Date.now();
+    const seen = samples.length;
+    phase = 'recovering';
+    await waitFor('the API to answer 200 again', async () => (samples.slice(seen).some((x) => x.route === 'GET /api/runs' && x.status === 200) ? true : undefined), 20_000);
+    recoveryMs.push(Date.now() - back);
+    phase = 'recovered';
+    await pause(1000);
+  }
   running = false;
   await clients;
 
   const of = (p: Phase) => samples.filter((x) => x.phase === p);
   const summary = (p: Phase) => of(p).map((x) => `${x.route} ${x.status}`).reduce<Record<string, number>>((acc, k) => ((acc[k] = (acc[k] ?? 0) + 1), acc), {});
-  console.log(`samples: ${samples.length}; by phase: ${JSON.stringify(Object.fromEntries((['up', 'stopping', 'down', 'starting', 'recovering', 'recovered'] as Phase[]).map((p) => [p, summary(p)])))}; first 200 after start: ${recoveryMs} ms; slowest answer: ${Math.max(...samples.map((x) => x.ms))} ms`);
+  console.log(`samples: ${samples.length}; by phase: ${JSON.stringify(Object.fromEntries((['up', 'stopping', 'down', 'starting', 'recovering', 'recovered'] as Phase[]).map((p) => [p, summary(p)])))}; first 200 after each start: ${recoveryMs.join(', ')} ms; slowest answer: ${Math.max(...samples.map((x) => x.ms))} ms`);
 
   // Before the outage everything works.
   expect(of('up').length).toBeGreaterThan(3);
   expect(of('up').filter((x) => x.status !== 200)).toEqual([]);
   // Nothing ever hangs, breaks the connection, or answers 500; every failure is a 503.
   expect(samples.filter((x) => typeof x.status !== 'number' || x.ms >= HANG_MS)).toEqual([]);
-  expect(samples.filter((x) => x.status !== 200 && x.status !== 503)).toEqual([]);
+  // The server logs every error it answers with a 500: there must be none, and it shows why if not.
+  const unhandled = server.output().split('\n').filter((line) => line.includes('unhandled error'));
+  expect({ failures: samples.filter((x) => x.status !== 200 && x.status !== 503), unhandled }).toEqual({ failures: [], unhandled: [] });
   // While it is down: 503 only, problem+json with Retry-After on API routes, "database down" on health.
   const down = of('down');
   expect(down.length).toBeGreaterThan(10);
