@@ -14,7 +14,7 @@ export const CALIBRATION_CHECK_CRON = '15 5 * * *';
 
 export async function startCalibrationDueJob(boss: PgBoss, deps: CalibrationNoticeDeps, options: { cron?: string } = {}): Promise<string> {
   await retryOnDeadlock(() => boss.createQueue(CALIBRATION_CHECK_QUEUE, { name: CALIBRATION_CHECK_QUEUE, retryLimit: 3, retryDelay: 300, expireInSeconds: 600 }));
-  await boss.schedule(CALIBRATION_CHECK_QUEUE, options.cron ?? CALIBRATION_CHECK_CRON, {}, { tz: 'UTC' });
+  await retryOnDeadlock(() => boss.schedule(CALIBRATION_CHECK_QUEUE, options.cron ?? CALIBRATION_CHECK_CRON, {}, { tz: 'UTC' }));
   return boss.work(CALIBRATION_CHECK_QUEUE, { batchSize: 1 }, async () => {
     const outcome = await checkCalibrationDue(deps);
     console.log(JSON.stringify({ level: 'info', msg: 'calibration check', ...outcome }));
