@@ -49,7 +49,8 @@ export async function runCli(argv: string[], output: CliOutput): Promise<number>
 function describe(error: unknown): string {
   if (error instanceof CliError || error instanceof ImportError) return error.message;
   if (error instanceof RangeError || error instanceof TypeError) return error.message;
-  if (error instanceof Error && 'code' in error && typeof error.code === 'string') {
+  // Node's file errors, also when they come from another realm (a test runner's sandbox), where instanceof Error fails.
+  if (typeof error === 'object' && error !== null && 'code' in error && typeof error.code === 'string' && 'message' in error && typeof error.message === 'string') {
     return error.message; // Node file errors: "ENOENT: no such file or directory, open 'x'"
   }
   return `internal error: ${error instanceof Error ? error.message : String(error)}`;

@@ -83,7 +83,14 @@ async function openSigmf(file: string): Promise<IqSource> {
   const base = file.replace(/\.sigmf-(meta|data)$/, '');
   const metaPath = `${base}.sigmf-meta`;
   const dataPath = `${base}.sigmf-data`;
-  const metaText = await fs.readFile(metaPath, 'utf8');
+  let metaText: string;
+  try {
+    metaText = await fs.readFile(metaPath, 'utf8');
+  } catch (error) {
+    if ((error as { code?: unknown }).code !== 'ENOENT') throw error;
+    const missing = path.basename(metaPath);
+    throw inputError(`${path.basename(file)}: a SigMF recording is read from its metadata, and ${missing} is missing`);
+  }
   const meta = inFile(metaPath, () => parseSigmfMeta(metaText));
   let size: number;
   try {

@@ -22,15 +22,45 @@ function describe(error: ErrorObject): FieldError {
   }
 }
 
-/** Validate `value` against `schema`, throwing a 422 problem that lists every field at fault. */
+/**
+ * Control characters other than tab, line feed and carriage return (C0, DEL, C1), and UTF-16
+ * surrogates without their pair: no name, note or reason needs them, PostgreSQL refuses NUL in
+ * text and JSON, and a lone surrogate is not Unicode at all.
+ */
+const UNPRINTABLE = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+
+/** Every string (and object key) of a schema-valid value that holds an UNPRINTABLE character, as field errors. */
+function unprintableFields(value: unknown): FieldError[] {
+  const errors: FieldError[] = [];
+  const pending: [unknown, string][] = [[value, '']];
+  while (pending.length > 0 && errors.length < 20) {
+    const [item, pointer] = pending.pop()!;
+    if (typeof item === 'string') {
+      if (UNPRINTABLE.test(item)) errors.push({ pointer: pointer || '/', message: 'must not contain control characters or broken Unicode' });
+    } else if (Array.isArray(item)) {
+      item.forEach((element, k) => pending.push([element, `${pointer}/${k}`]));
+    } else if (typeof item === 'object' && item !== null) {
+      for (const [key, element] of Object.entries(item)) {
+        if (UNPRINTABLE.test(key)) errors.push({ pointer: pointer || '/', message: 'must not have a field name with control characters or broken Unicode' });
+        pending.push([element, `${pointer}/${key.replace(/~/g, '~0').replace(/\//g, '~1')}`]);
+      }
+    }
+  }
+  return errors;
+}
+
+/**
+ * Validate `value` against `schema`, throwing a 422 problem that lists every field at fault.
+ * Text that passes the schema is also refused when it holds control characters or broken Unicode.
+ */
 export function validate<T>(schema: object, value: unknown, what = 'The request'): T {
   let check = cache.get(schema);
   if (!check) {
     check = ajv.compile(schema);
     cache.set(schema, check);
   }
-  if (!check(value)) {
-    const errors = (check.errors ?? []).map(describe);
+  const errors = check(value) ? unprintableFields(value) : (check.errors ?? []).map(describe);
+  if (errors.length > 0) {
     const first = errors[0];
     throw validationFailed(`${what} has ${errors.length} problem${errors.length === 1 ? '' : 's'}: ${first.pointer} ${first.message}.`, errors);
   }

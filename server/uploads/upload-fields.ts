@@ -16,12 +16,13 @@ const NUMBER_TEXT = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?$/i;
  * // { referenceDbm: 47.5, sideband: 'usb' }
  */
 export function readUploadFields<T>(raw: Record<string, unknown>, schema: object): T {
-  const typed: Record<string, unknown> = {};
+  // No prototype: a field named __proto__ stays an ordinary (unknown, so refused) field.
+  const typed: Record<string, unknown> = Object.create(null);
   for (const [name, value] of Object.entries(raw)) {
     if (typeof value !== 'string') throw validationFailed(`The field "${name}" must be sent once, as text.`, [{ pointer: `/${name}`, message: 'must be sent once, as text' }]);
     const text = value.trim();
     if ((NUMERIC_UPLOAD_FIELDS as readonly string[]).includes(name)) typed[name] = NUMBER_TEXT.test(text) ? Number(text) : text;
     else typed[name] = name === 'sideband' ? text.toLowerCase() : text;
   }
-  return validate<T>(schema, typed, 'The upload');
+  return { ...validate<object>(schema, typed, 'The upload') } as T;
 }

@@ -51,8 +51,9 @@ export function parseSigmfMeta(text: string): SigmfMeta {
   }
   type Search = { from?: number; occurrence?: number };
   const fail = (key: string, detail: string, search: Search = {}): never => {
-    const position = jsonKeyPosition(body, key, search);
-    const location = position ? { line: position.line, column: position.column } : {};
+    // A missing member is reported where its object starts ("global"), else at the top.
+    const position = jsonKeyPosition(body, key, search) ?? jsonKeyPosition(body, 'global') ?? { line: 1, column: 1 };
+    const location = { line: position.line, column: position.column };
     throw new ImportError(NAME, detail, location);
   };
   if (!isObject(root)) {

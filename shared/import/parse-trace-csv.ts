@@ -57,6 +57,9 @@ export function parseTraceCsv(text: string): ImportedTrace {
       if (rbw !== null) {
         const unit = FREQUENCY_UNIT_HZ[normalizeUnit(rbw[1] ?? rbw[3] ?? 'hz')] ?? 1;
         commentRbwHz = Number(rbw[2]) * unit;
+        if (!(Number.isFinite(commentRbwHz) && commentRbwHz > 0)) {
+          throw new ImportError(NAME, `the RBW comment gives ${rbw[2]}, not a bandwidth above 0 Hz`, { line, column: 1 });
+        }
       }
       continue;
     }
@@ -103,6 +106,9 @@ export function parseTraceCsv(text: string): ImportedTrace {
     if (rbwIndex >= 0) {
       const rbwColumn = header.columns[rbwIndex] as { hzPerUnit: number };
       const rowRbwHz = number(rbwIndex, 'RBW') * rbwColumn.hzPerUnit;
+      if (!(Number.isFinite(rowRbwHz) && rowRbwHz > 0)) {
+        throw new ImportError(NAME, `RBW ${rowRbwHz} Hz is not a bandwidth above 0 Hz`, { line, column: rbwIndex + 1 });
+      }
       if (rbwHz !== undefined && rowRbwHz !== rbwHz) {
         const detail = `RBW changes from ${rbwHz} Hz to ${rowRbwHz} Hz within the trace`;
         throw new ImportError(NAME, detail, { line, column: rbwIndex + 1 });
@@ -113,7 +119,8 @@ export function parseTraceCsv(text: string): ImportedTrace {
     levels.push(levelDbm);
   }
   if (header === undefined) {
-    throw new ImportError(NAME, 'no header row (expected e.g. "frequency_hz,level_dbm")');
+    // No line held a header: the location is the end of the file.
+    throw new ImportError(NAME, 'no header row (expected e.g. "frequency_hz,level_dbm")', { line: lines.length });
   }
   if (frequencies.length < 2) {
     const detail = `${frequencies.length} data row(s); a trace needs at least 2`;
