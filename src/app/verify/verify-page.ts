@@ -24,6 +24,7 @@ export class VerifyPage {
   protected readonly dragging = signal(false);
   protected readonly check = signal<{ fileName: string; sha256: string; matches: boolean } | null>(null);
   protected readonly hashing = signal(false);
+  protected readonly hashError = signal<string | null>(null);
 
   constructor() {
     effect(() => {
@@ -55,9 +56,17 @@ export class VerifyPage {
 
   async hashFile(file: File): Promise<void> {
     this.hashing.set(true);
-    const digest = await crypto.subtle.digest('SHA-256', await file.arrayBuffer());
-    const sha256 = [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join('');
-    this.check.set({ fileName: file.name, sha256, matches: sha256 === this.report()?.sha256 });
-    this.hashing.set(false);
+    this.hashError.set(null);
+    this.check.set(null);
+    try {
+      // crypto.subtle exists only on secure pages (https or localhost).
+      const digest = await crypto.subtle.digest('SHA-256', await file.arrayBuffer());
+      const sha256 = [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join('');
+      this.check.set({ fileName: file.name, sha256, matches: sha256 === this.report()?.sha256 });
+    } catch {
+      this.hashError.set(`${file.name} could not be checked in this browser. Compare its SHA-256 with the one above using another tool.`);
+    } finally {
+      this.hashing.set(false);
+    }
   }
 }
