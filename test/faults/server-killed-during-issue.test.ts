@@ -6,8 +6,10 @@
  * issued, the audit entry and the client's e-mail job — or not at all (no report, no credit taken,
  * no audit entry, no mail, run still approved), and issuing again must then work exactly once.
  *
- * The kill lands at fractions of a measured issue time; a probe connection records whether the
- * server had a transaction open at that instant, and at least one kill must land inside one.
+ * A probe connection watches pg_stat_activity: once the issue's transaction is open, the kill
+ * lands at a fraction of a measured issue time, or right after the transaction has ended (the
+ * commit is done, the answer may not be sent). The probe records whether a transaction was open at
+ * the instant of the kill, and at least one kill must land inside one.
  */
 import crypto from 'node:crypto';
 import { execFileSync } from 'node:child_process';
@@ -24,7 +26,7 @@ import { asSystem } from '../../server/tenancy/tenant-transaction';
 import { buildLabScenario, TEST_PASSWORD } from '../support/factories';
 import { testDatabaseUrl } from '../support/test-app';
 import { approvedRun } from '../support/approved-run';
-import { killHard, signedIn, startServer, waitFor, type Api, type ProductServer } from '../support/product-server';
+import { killHard, signedIn, startServer, type Api, type ProductServer } from '../support/product-server';
 
 jest.setTimeout(150_000);
 
@@ -64,10 +66,25 @@ afterAll(async () => {
   fs.rmSync(pdfDir, { recursive: true, force: true });
 });
 
-/** Sessions of the API server (application_name 'sidecheck', not this probe) with a transaction open. */
-async function serverTransactionsOpen(): Promise<number> {
-  const { rows } = await probe.query(`SELECT count(*)::int AS n FROM pg_stat_activity WHERE datname = current_database() AND application_name = 'sidecheck' AND xact_start IS NOT NULL`);
+/**
+ * Sessions of the API server (application_name 'sidecheck', not this probe nor the job queue) with
+ * a transaction open for at least `minMs` (a single statement outside a transaction lasts less).
+ */
+async function serverTransactionsOpen(minMs = 0): Promise<number> {
+  const { rows } = await probe.query(
+    `SELECT count(*)::int AS n FROM pg_stat_activity WHERE datname = current_database() AND application_name = 'sidecheck' AND xact_start IS NOT NULL AND clock_timestamp() - xact_start >= $1 * interval '1 millisecond'`,
+    [minMs],
+  );
   return rows[0].n;
+}
+
+/** Polls every 5 ms until `check` holds (bounded: 15 s). */
+async function until(what: string, check: () => Promise<boolean>): Promise<void> {
+  const deadline = Date.now() + 15_000;
+  while (!(await check())) {
+    if (Date.now() > deadline) throw new Error(`${what}: not within 15 s`);
+    await sleep(5);
+  }
 }
 
 /** Everything the database holds about the run's issue, read in system scope. */
@@ -141,18 +158,26 @@ test('a report issue killed at any moment is there completely or not at all, and
     expect(await expectAllOrNothing(normal.id)).toBe(true);
   }
 
-  const attempts: { runId: string; delayMs: number; inTransaction: boolean; answered: number | null; issued?: boolean }[] = [];
-  for (const fraction of [0.1, 0.35, 0.6, 0.85]) {
+  const attempts: { runId: string; kill: string; inTransaction: boolean; answered: number | null; issued?: boolean }[] = [];
+  for (const when of [0.05, 0.3, 0.6, 0.9, 'after the commit'] as const) {
     const run = await approvedRun(engineer, reviewer, s.plan.id);
-    const delayMs = Math.round(issueMs * fraction * (0.9 + 0.2 * Math.random()));
     const pending = reviewer('POST', `/runs/${run.id}/issue`).then((res) => res.status, () => null);
-    await sleep(delayMs);
+    await until('the issue’s transaction to open', async () => (await serverTransactionsOpen(30)) > 0);
+    let kill: string;
+    if (typeof when === 'number') {
+      const delayMs = Math.round(issueMs * when * (0.8 + 0.4 * Math.random()));
+      await sleep(delayMs);
+      kill = `${delayMs} ms into the transaction`;
+    } else {
+      await until('the issue’s transaction to end', async () => (await serverTransactionsOpen()) === 0);
+      kill = when;
+    }
     const inTransaction = (await serverTransactionsOpen()) > 0;
     await killHard(server);
     const answered = await pending;
-    attempts.push({ runId: run.id, delayMs, inTransaction, answered });
+    attempts.push({ runId: run.id, kill, inTransaction, answered });
     // PostgreSQL aborts the dead client's transaction when it sees the socket close.
-    await waitFor('the killed server’s transactions to end', async () => ((await serverTransactionsOpen()) === 0 ? true : undefined), 10_000);
+    await until('the killed server’s transactions to end', async () => (await serverTransactionsOpen()) === 0);
     attempts[attempts.length - 1].issued = await expectAllOrNothing(run.id);
     server = await start();
   }
