@@ -29,11 +29,21 @@ export function webhookRoute(deps: BillingDeps): RouteDef {
         event = deps.payments.webhooks.constructEvent(raw, signature, deps.webhookSecret);
       } catch (error) {
         if (error instanceof Stripe.errors.StripeSignatureVerificationError) throw badRequest('The webhook signature does not match this body.');
+        // Signed, but not JSON: retrying cannot help, so a 400 rather than a 500.
+        if (error instanceof SyntaxError) throw badRequest('The webhook body is signed but is not JSON.');
         throw error;
       }
+      if (!isWellFormedEvent(event)) throw badRequest('The webhook event is not well formed: it needs a string id and type, and data.object with a string id.');
       const outcome = await asSystem(deps.sequelize, (t) => applyPaymentEvent(deps, t, event));
       ctx.status(200);
       return { received: true, eventId: event.id, outcome };
     },
   });
+}
+
+/** The parts of an event every handler reads: a signed body can still be any JSON (a leaked secret, a provider fault). */
+function isWellFormedEvent(event: unknown): event is Stripe.Event {
+  const e = event as { id?: unknown; type?: unknown; data?: { object?: unknown } } | null;
+  const object = e?.data?.object as { id?: unknown } | null | undefined;
+  return typeof e === 'object' && e !== null && !Array.isArray(e) && typeof e.id === 'string' && typeof e.type === 'string' && typeof object === 'object' && object !== null && !Array.isArray(object) && typeof object.id === 'string';
 }

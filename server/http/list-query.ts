@@ -1,5 +1,7 @@
 import { badRequest } from './problem';
 
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
 export interface ListQuery {
   page: number;
   pageSize: number;
@@ -10,7 +12,7 @@ export interface ListQuery {
 
 /**
  * Read ?page=&pageSize=&sort=field|-field&<filter>= against allow-lists, so a list endpoint never
- * passes anything unchecked to SQL.
+ * passes anything unchecked to SQL; a filter named `...Id` must be a UUID (400 otherwise).
  */
 export function readListQuery(query: Record<string, unknown>, options: { sortable: readonly string[]; filterable: readonly string[]; defaultSort: string }): ListQuery {
   const one = (name: string): string | undefined => {
@@ -30,6 +32,8 @@ export function readListQuery(query: Record<string, unknown>, options: { sortabl
   const filter: Record<string, string> = {};
   for (const name of options.filterable) {
     const v = one(name);
+    // An id filter that is not a UUID would only fail in PostgreSQL: say what is wrong instead.
+    if (v !== undefined && v !== '' && name.endsWith('Id') && !UUID.test(v)) throw badRequest(`${name} must be an id (a UUID).`);
     if (v !== undefined && v !== '') filter[name] = v;
   }
   return { page, pageSize, sort, direction, filter };

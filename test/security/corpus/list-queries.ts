@@ -1,7 +1,7 @@
 /**
  * Query strings for list routes: SQL-looking filters and sort keys, oversize or negative
  * pagination, repeated parameters, NUL bytes and prototype keys. A list route answers a normal
- * page (200) or refuses with 400/422 (404 for a filter id that names nothing); never 500.
+ * page (200) or refuses with 400/422 (404 only where the path names a record); never 500.
  * Each entry is the raw query string, already percent-encoded.
  */
 const q = (params: Record<string, string>) => Object.entries(params).map(([k, v]) => `${encodeURIComponent(k)}=${encodeURIComponent(v)}`).join('&');
