@@ -1,3 +1,4 @@
+import crypto from 'node:crypto';
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { RequestHandler } from 'express';
@@ -18,7 +19,9 @@ export function configurePassport(secret: string): passport.PassportStatic {
     new JwtStrategy(
       {
         jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-        secretOrKey: secret,
+        // A KeyObject, made once: given a string, jsonwebtoken first tries to parse it as a public key
+        // on every request and throws (about 1 ms per request at load; bench/load.ts).
+        secretOrKey: crypto.createSecretKey(Buffer.from(secret, 'utf8')) as unknown as string,
         algorithms: ['HS256'],
         issuer: JWT_ISSUER,
         audience: JWT_AUDIENCE,

@@ -8,9 +8,10 @@ import { migration as uploads } from './migrations/0005-uploads';
 import { migration as comments } from './migrations/0006-comments';
 import { migration as certificates } from './migrations/0007-certificates';
 import { migration as calibrationNotices } from './migrations/0008-calibration-notices';
+import { migration as scaleOut } from './migrations/0009-scale-out';
 
 /** Every migration, in order. Add a new file under migrations/ and append it here. */
-const MIGRATIONS = [foundation, accounts, equipment, billing, uploads, comments, certificates, calibrationNotices];
+const MIGRATIONS = [foundation, accounts, equipment, billing, uploads, comments, certificates, calibrationNotices, scaleOut];
 
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({

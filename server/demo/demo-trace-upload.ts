@@ -31,7 +31,7 @@ export async function ensureDemoTraceUpload(sequelize: Sequelize, deps: UploadDe
   const ctx = { organizationId: found.labId, principal: { userId: engineer.id, email: engineer.email, displayName: engineer.displayName, memberships: [] }, req: {}, transaction: null } as unknown as RouteContext;
   const target = await inTenant(sequelize, found.labId, async () => {
     const t = await loadUploadTarget(found.runId, found.caseId);
-    return { ...t, instruments: await assignedInstruments(found.runId) };
+    return { ...t, instruments: await assignedInstruments({ id: found.runId, organizationId: found.labId }) };
   });
   const trace = demoMaskTrace();
   const received = await receiveLocalFile(deps.incomingDir, { name: 'HX150 2182 kHz two-tone mask.csv', bytes: Buffer.from(trace.csv), contentType: 'text/csv' }, { referenceDbm: trace.referenceDbm.toFixed(2) });

@@ -12,9 +12,12 @@ import type { UncertaintyContribution } from '../../shared/uncertainty/uncertain
 import { audit } from '../audit/audit';
 import { calibrationStatus, todayIso } from './calibration-status';
 
-/** The instruments assigned to a run, by name. */
-export async function assignedInstruments(runId: string): Promise<Instrument[]> {
-  const links = await RunInstrument.findAll({ where: { runId }, attributes: ['instrumentId'] });
+/**
+ * The instruments assigned to a run, by name. The organization is named in the query (not only
+ * by row-level security) so the (organization_id, run_id, ...) primary key serves it.
+ */
+export async function assignedInstruments(run: { id: string; organizationId: string }): Promise<Instrument[]> {
+  const links = await RunInstrument.findAll({ where: { organizationId: run.organizationId, runId: run.id }, attributes: ['instrumentId'] });
   if (links.length === 0) return [];
   return Instrument.findAll({ where: { id: { [Op.in]: links.map((l) => l.instrumentId) } }, order: [['name', 'ASC'], ['id', 'ASC']] });
 }
@@ -71,8 +74,8 @@ export async function setRunInstruments(ctx: RouteContext, run: TestRun, instrum
   }
   const today = todayIso();
   refuseOverdue(found, today, 'Calibrate it, or use another instrument, before using it on a run.');
-  const before = (await assignedInstruments(run.id)).map((i) => presentRunInstrument(i, today));
-  await RunInstrument.destroy({ where: { runId: run.id } });
+  const before = (await assignedInstruments(run)).map((i) => presentRunInstrument(i, today));
+  await RunInstrument.destroy({ where: { organizationId: run.organizationId, runId: run.id } });
   await RunInstrument.bulkCreate(instrumentIds.map((instrumentId) => ({ organizationId: run.organizationId, runId: run.id, instrumentId, assignedBy: ctx.principal?.userId ?? null })));
   await audit(ctx, { action: 'set-instruments', entity: 'test-run', entityId: run.id, before: { instruments: before }, after: { instruments: found.map((i) => presentRunInstrument(i, today)) } });
 }

@@ -24,7 +24,7 @@ export async function buildReportDocument(input: {
   const lab = (await Organization.findByPk(run.organizationId))!;
   const engineer = run.engineerId ? await User.findByPk(run.engineerId) : null;
   const cases = await TestCase.findAll({ where: { planId: plan.id }, order: [['position', 'ASC']] });
-  const results = await Result.findAll({ where: { runId: run.id }, order: [['createdAt', 'DESC']] });
+  const results = await Result.findAll({ where: { organizationId: run.organizationId, runId: run.id }, order: [['createdAt', 'DESC']] });
   const rules = plan.ruleSetSnapshot as RuleSetBody & { name?: string; version?: number };
   const rows: ReportResult[] = cases.map((c) => {
     const r = results.find((x) => x.testCaseId === c.id);
@@ -80,7 +80,7 @@ export async function buildReportDocument(input: {
       { label: 'Ambient temperature', value: '23 °C ± 5 °C' },
       { label: 'Supply voltage', value: 'Nominal, as stated by the manufacturer' },
     ],
-    equipment: (await assignedInstruments(run.id)).map((i) => ({ name: i.name, model: i.model, serialNumber: i.serialNumber, calibrationDue: i.calibrationDue })),
+    equipment: (await assignedInstruments(run)).map((i) => ({ name: i.name, model: i.model, serialNumber: i.serialNumber, calibrationDue: i.calibrationDue })),
     results: rows,
     deviations: [],
     testedBy: { name: engineer?.displayName ?? 'Unknown', role: ROLE_LABELS.engineer },

@@ -37,7 +37,7 @@ export async function issueReport(deps: ReportDeps, ctx: RouteContext, run: Test
   if (run.state !== 'approved') throw conflict(`Only an authorized run can be issued; this one is ${run.state}.`, { code: 'illegal-transition' });
   const lab = (await Organization.findByPk(run.organizationId))!;
   // A run issued before and reopened for correction gets the same number, next revision (7.8.8).
-  const previous = await Report.findOne({ where: { runId: run.id }, order: [['revision', 'DESC']], attributes: { exclude: ['pdf'] } });
+  const previous = await Report.findOne({ where: { organizationId: run.organizationId, runId: run.id }, order: [['revision', 'DESC']], attributes: { exclude: ['pdf'] } });
   let reportNumber: string;
   if (previous) {
     reportNumber = previous.reportNumber;

@@ -28,10 +28,12 @@ export async function runDetail(run: TestRun) {
   const device = (await Device.findByPk(plan.deviceId))!;
   const client = (await Client.findByPk(device.clientId))!;
   const cases = await TestCase.findAll({ where: { planId: plan.id }, order: [['position', 'ASC']] });
-  const readings = await Reading.findAll({ where: { runId: run.id }, order: [['createdAt', 'DESC']] });
-  const results = await Result.findAll({ where: { runId: run.id }, order: [['createdAt', 'DESC']] });
-  const uploads = await Upload.findAll({ where: { runId: run.id }, attributes: { exclude: ['analysis'] }, order: [['createdAt', 'DESC']] });
-  const instruments = await assignedInstruments(run.id);
+  // Each query names the organization so the (organization_id, run_id, ...) indexes serve it.
+  const byRun = { organizationId: run.organizationId, runId: run.id };
+  const readings = await Reading.findAll({ where: byRun, order: [['createdAt', 'DESC']] });
+  const results = await Result.findAll({ where: byRun, order: [['createdAt', 'DESC']] });
+  const uploads = await Upload.findAll({ where: byRun, attributes: { exclude: ['analysis'] }, order: [['createdAt', 'DESC']] });
+  const instruments = await assignedInstruments(run);
   const today = todayIso();
   return {
     ...presentRun(run),
@@ -81,7 +83,7 @@ export async function saveReading(ctx: RouteContext, run: TestRun, caseId: strin
   if (!testCase) throw notFound('The test case');
   const plan = (await TestPlan.findByPk(run.planId))!;
   checkReadingShape(testCase.kind, values);
-  const instruments = await assignedInstruments(run.id);
+  const instruments = await assignedInstruments(run);
   refuseOverdue(instruments, todayIso(), 'Replace or recalibrate it before saving readings with it.');
   // The entered values are kept unchanged even when they do not evaluate yet: nothing typed is lost.
   const reading = await Reading.create({ organizationId: run.organizationId, runId: run.id, testCaseId: testCase.id, values, enteredBy: ctx.principal?.userId ?? null });
@@ -130,7 +132,7 @@ function checkReadingShape(kind: TestCase['kind'], values: ReadingValues): void 
 }
 
 async function enteredBy(run: TestRun): Promise<string[]> {
-  const rows = await Reading.findAll({ where: { runId: run.id, enteredBy: { [Op.ne]: null } }, attributes: ['enteredBy'], group: ['enteredBy'] });
+  const rows = await Reading.findAll({ where: { organizationId: run.organizationId, runId: run.id, enteredBy: { [Op.ne]: null } }, attributes: ['enteredBy'], group: ['enteredBy'] });
   return rows.map((r) => r.enteredBy!);
 }
 
@@ -143,7 +145,7 @@ export async function transition(ctx: RouteContext, run: TestRun, action: RunAct
     const detail = await runDetail(run);
     const missing = detail.testCases.filter((c) => !c.result && !c.traceResult);
     if (missing.length) throw conflict(`Every test case needs a computed result before review; missing: ${missing.map((c) => c.label).join(', ')}.`, { code: 'results-missing' });
-    refuseOverdue(await assignedInstruments(run.id), todayIso(), 'Repeat the affected measurements with calibrated equipment before review.');
+    refuseOverdue(await assignedInstruments(run), todayIso(), 'Repeat the affected measurements with calibrated equipment before review.');
   }
   if (action === 'approve') {
     // Four eyes: the person who authorizes must not be one who measured (ISO/IEC 17025:2017 7.8.1.1).

@@ -19,7 +19,7 @@ import type { UploadDeps } from './upload-deps';
 export async function createUpload(deps: UploadDeps, ctx: RouteContext): Promise<unknown> {
   const target = await inTenant(deps.sequelize, ctx.organizationId, async () => {
     const found = await loadUploadTarget(ctx.params.id, ctx.params.caseId);
-    return { ...found, instruments: await assignedInstruments(found.run.id) };
+    return { ...found, instruments: await assignedInstruments(found.run) };
   });
   refuseOverdue(target.instruments, todayIso(), 'Replace or recalibrate it before uploading measurements made with it.');
   const received = await receiveMultipart(ctx.req, ctx.res, { incomingDir: deps.incomingDir, maxFileBytes: deps.settings.maxFileBytes, allowData: true });

@@ -19,7 +19,7 @@ const SUMMARY_ATTRIBUTES = { exclude: ['analysis'] as ['analysis'] };
 
 /** Uploads of traces and I/Q captures to a run's test cases, and the manufacturer's pre-check. */
 export function uploadRoutes(deps: UploadDeps): RouteDef[] {
-  const limiter = createPrecheckLimiter(deps.settings.precheckPerHour);
+  const limiter = createPrecheckLimiter(deps.sequelize, deps.settings.precheckPerHour);
   return [
     route({
       method: 'post',

@@ -21,7 +21,7 @@ import type { createPrecheckLimiter } from './precheck-limiter';
  * unaccredited, so it can never be mistaken for, or become, a report.
  */
 export async function runPrecheck(deps: UploadDeps, limiter: ReturnType<typeof createPrecheckLimiter>, ctx: RouteContext): Promise<unknown> {
-  limiter.take(ctx.principal!.userId);
+  await limiter.take(ctx.principal!.userId);
   const received = await receiveMultipart(ctx.req, ctx.res, { incomingDir: deps.incomingDir, maxFileBytes: deps.settings.maxPrecheckBytes, allowData: true });
   try {
     let ruleSet: RuleSet | null = null;
