@@ -6,7 +6,7 @@ ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$ROOT"
 bash scripts/ensure-deps.sh >/dev/null
 TSX="node node_modules/tsx/dist/cli.mjs"
-for bench in bench/engine.ts bench/report-pdf.ts bench/client.ts bench/api.ts; do
+for bench in bench/engine.ts bench/report-pdf.ts bench/client.ts bench/api.ts bench/load.ts; do
   if [ -f "$bench" ]; then
     echo
     echo "== $bench"
