@@ -11,7 +11,8 @@ export interface ImportErrorLocation {
  * example a negative sample rate passed as an option) throw RangeError/TypeError instead.
  *
  * The message starts with the importer's name and the location, so it can be shown to a user
- * as is: `parseTraceCsv: line 7, column 2: "-7,5x" is not a number`.
+ * as is: `parseTraceCsv: line 7, column 2: "-7,5x" is not a number`. A detail longer than 300
+ * characters (a quoted megabyte-long field) is cut short with "...".
  *
  * @example
  * try { parseTraceCsv(text); } catch (e) { if (e instanceof ImportError) console.log(e.line); }
@@ -25,12 +26,19 @@ export class ImportError extends Error {
   readonly byteOffset: number | undefined;
 
   constructor(importerName: string, detail: string, location: ImportErrorLocation = {}) {
-    super(`${importerName}: ${describeLocation(location)}${detail}`);
+    super(`${importerName}: ${describeLocation(location)}${shortened(detail)}`);
     this.name = 'ImportError';
     this.line = location.line;
     this.column = location.column;
     this.byteOffset = location.byteOffset;
   }
+}
+
+/** Longest detail kept, characters: a quoted field of a hostile file can be megabytes long. */
+const MAX_DETAIL_LENGTH = 300;
+
+function shortened(detail: string): string {
+  return detail.length <= MAX_DETAIL_LENGTH ? detail : `${detail.slice(0, MAX_DETAIL_LENGTH - 3)}...`;
 }
 
 function describeLocation(location: ImportErrorLocation): string {

@@ -93,7 +93,12 @@ beforeAll(async () => {
   console.log(`hostile-input corpus: ${counts.total} inputs (${Object.entries(counts).filter(([k]) => k !== 'total').map(([k, v]) => `${k} ${v}`).join(', ')})`);
 }, 120_000);
 
+const savedEnv = { SIDECHECK_DATA_DIR: process.env.SIDECHECK_DATA_DIR, SIDECHECK_PRECHECK_PER_HOUR: process.env.SIDECHECK_PRECHECK_PER_HOUR };
 afterAll(async () => {
+  for (const [name, value] of Object.entries(savedEnv)) {
+    if (value === undefined) delete process.env[name];
+    else process.env[name] = value;
+  }
   await t?.close();
   fs.rmSync(dataDir, { recursive: true, force: true });
   const lines = [...statusSeen].map(([name, seen]) => `  ${name.slice(0, 70)}: ${[...seen].sort(([a], [b]) => a - b).map(([status, n]) => `${status}x${n}`).join(' ')}`);
@@ -194,6 +199,14 @@ async function fingerprint(): Promise<Record<string, string>> {
   });
 }
 
+/** Tables that count attempts by design (the pre-check allowance counts refused attempts too): not "stored" data. */
+const ATTEMPT_COUNTERS = ['precheck_starts'];
+
+/** The tables whose fingerprint differs, apart from the attempt counters. */
+function changedTables(before: Record<string, string>, after: Record<string, string>): string[] {
+  return Object.keys(after).filter((table) => after[table] !== before[table] && !ATTEMPT_COUNTERS.includes(table));
+}
+
 interface Failure {
   route: string;
   input: string;
@@ -201,12 +214,15 @@ interface Failure {
   detail: string;
 }
 
-/** Checks one answer: a 4xx problem+json with a title and an actionable detail (and the expected status, when given). */
+/** Largest refusal we expect, bytes: a problem names a few fields; a bigger answer would amplify a hostile request (common practice). */
+const MAX_PROBLEM_BYTES = 20_000;
+
+/** Checks one answer: a small 4xx problem+json with a title and an actionable detail (and the expected status, when given). */
 function judge(failures: Failure[], route: string, input: string, res: request.Response, allowed?: number[]): boolean {
   const body = res.body as { title?: unknown; detail?: unknown };
   const problem = /application\/problem\+json/.test(String(res.headers['content-type'])) && typeof body.title === 'string' && body.title.length > 0 && typeof body.detail === 'string' && body.detail.length >= 10;
-  const ok = res.status >= 400 && res.status < 500 && problem && (!allowed || allowed.includes(res.status));
-  if (!ok) failures.push({ route, input, status: res.status, detail: String(body.detail ?? res.text).slice(0, 200) });
+  const ok = res.status >= 400 && res.status < 500 && problem && res.text.length <= MAX_PROBLEM_BYTES && (!allowed || allowed.includes(res.status));
+  if (!ok) failures.push({ route, input, status: res.status, detail: `${String(body.detail ?? res.text).slice(0, 200)} (${res.text.length} bytes)` });
   return ok;
 }
 
@@ -269,7 +285,7 @@ test('every write route refuses hostile JSON bodies with a 4xx problem, stores n
       if (res) judge(failures, key, input.label, res, input.allowed);
     });
     const after = await fingerprint();
-    const changed = Object.keys(after).filter((table) => after[table] !== before[table]);
+    const changed = changedTables(before, after);
     if (changed.length) failures.push({ route: key, input: '(whole batch)', status: 'stored', detail: `tables changed: ${changed.join(', ')}` });
     await expectHealthy();
   }
@@ -298,9 +314,55 @@ test('every write route answers 400/404 for a hostile id in its path (SQL, NUL, 
     });
   }
   const after = await fingerprint();
-  const changed = Object.keys(after).filter((table) => after[table] !== before[table]);
-  expect(changed).toEqual([]);
+  expect(changedTables(before, after)).toEqual([]);
   expect(await storedFiles(dataDir)).toEqual(filesBefore);
+  expect(failures).toEqual([]);
+  await expectHealthy();
+});
+
+test('hostile credentials (malformed or unsigned tokens, SQL in API keys) get 401/403 on write routes, and the pre-check refuses hostile rule-set ids', async () => {
+  const failures: Failure[] = [];
+  const unsigned = `${Buffer.from('{"alg":"none","typ":"JWT"}').toString('base64url')}.${Buffer.from(JSON.stringify({ sub: s.admin.id, exp: 9_999_999_999 })).toString('base64url')}.`;
+  const headers: [string, string, string][] = [
+    ['Authorization', 'Bearer', 'Bearer without a token'],
+    ['Authorization', 'Bearer not.a.jwt', 'Bearer of three junk parts'],
+    ['Authorization', `Bearer ${unsigned}`, 'an unsigned (alg none) token'],
+    ['Authorization', `Bearer ${'a'.repeat(8000)}`, 'an 8000-character token'],
+    ['Authorization', "ApiKey ' OR 1=1 --", 'SQL as an API key'],
+    ['Authorization', `ApiKey sck_${'x'.repeat(4000)}`, 'a 4000-character API key'],
+    ['X-Api-Key', "sck_'; DROP TABLE api_keys; --", 'SQL in X-Api-Key'],
+    ['Authorization', 'Basic YWRtaW46YWRtaW4=', 'Basic credentials'],
+  ];
+  const targets = routes.filter((r) => ['post /devices', 'put /runs/:id/cases/:caseId/reading', 'delete /api-keys/:id'].includes(keyOf(r)));
+  const before = await fingerprint();
+  for (const r of targets) {
+    for (const [name, value, label] of headers) {
+      requestsSent++;
+      const res = await sendSafely(failures, keyOf(r), label, () => (request(t.app) as unknown as Record<string, (u: string) => request.Test>)[r.method](`/api${fill(r.path)}`).timeout({ response: HANG_MS, deadline: HANG_MS }).set(name, value).send(validBodies()[keyOf(r)] ?? {}));
+      if (res) judge(failures, keyOf(r), label, res, [401, 403]);
+    }
+  }
+  const precheck = routes.find((r) => r.path === '/precheck')!;
+  const trace = { bytes: Buffer.from(validTraceCsv()), name: 'trace.csv' };
+  for (const bad of BAD_PATH_IDS) {
+    const entry: HostileFile = { label: `ruleSetId ${bad.label}`, group: 'trace-csv', file: trace, fields: { referenceDbm: '40' }, caseKind: 'emission-mask', expect: 'refuse' };
+    let value: string;
+    try {
+      value = decodeURIComponent(bad.segment);
+    } catch {
+      value = bad.segment;
+    }
+    requestsSent++;
+    // The corpus entry's fields come first; ruleSetId is then sent twice (the route's own and this one) or once when it is ours.
+    const res = await sendSafely(failures, 'post /precheck', entry.label, () => {
+      let req = request(t.app).post('/api/precheck').timeout({ response: HANG_MS, deadline: HANG_MS }).set('Authorization', `Bearer ${callerFor(precheck)!.token}`).set('X-Organization-Id', callerFor(precheck)!.org);
+      req = req.field('referenceDbm', '40').field('ruleSetId', value.slice(0, 200));
+      return req.attach('file', trace.bytes, { filepath: trace.name, contentType: 'text/csv' } as unknown as { filename: string });
+    });
+    if (res) judge(failures, 'post /precheck', entry.label, res, [400, 404, 422]);
+  }
+  const after = await fingerprint();
+  expect(changedTables(before, after)).toEqual([]);
   expect(failures).toEqual([]);
   await expectHealthy();
 });
@@ -334,7 +396,7 @@ test('the payment webhook, even when the body is correctly signed, refuses what 
     if (res && res.status !== 200) judge(failures, 'post /billing/webhook (signed)', b.label, res);
   });
   const after = await fingerprint();
-  expect(Object.keys(after).filter((table) => after[table] !== before[table])).toEqual([]);
+  expect(changedTables(before, after)).toEqual([]);
   expect(failures).toEqual([]);
   expect(({} as Record<string, unknown>).polluted).toBeUndefined();
   await expectHealthy();
@@ -384,7 +446,7 @@ describe('uploads and the pre-check refuse hostile files with a 4xx problem and 
     expect(failures).toEqual([]);
     // The pre-check stores nothing, ever.
     const after = await fingerprint();
-    expect(Object.keys(after).filter((table) => after[table] !== before[table])).toEqual([]);
+    expect(changedTables(before, after)).toEqual([]);
   });
 });
 
@@ -404,7 +466,7 @@ test('list routes answer SQL-looking filters, sort keys and oversize pages with 
     });
   }
   const after = await fingerprint();
-  expect(Object.keys(after).filter((table) => after[table] !== before[table])).toEqual([]);
+  expect(changedTables(before, after)).toEqual([]);
   expect(failures).toEqual([]);
   expect(({} as Record<string, unknown>).polluted).toBeUndefined();
   await expectHealthy();

@@ -65,8 +65,8 @@ export const RAW_BODIES: RawBody[] = [
   { label: 'two objects back to back', text: '{"a":1}{"b":2}', status: 400 },
   { label: 'NUL byte in the middle', text: '{"a":\u00001}', status: 400 },
   { label: 'unbalanced 10,000 open brackets', text: '['.repeat(10_000), status: 400 },
-  { label: '2 MB string (over the 1 MB limit)', text: `{"name": ${JSON.stringify('a'.repeat(2_000_000))}}`, status: 413 },
-  { label: '600,000 levels of nesting (over 1 MB)', text: nest('[', ']', 600_000), status: 413 },
+  { label: '1.1 MB string (over the 1 MiB limit)', text: `{"name": ${JSON.stringify('a'.repeat(1_100_000))}}`, status: 413 },
+  { label: '550,000 levels of nesting (over 1 MiB)', text: nest('[', ']', 550_000), status: 413 },
 ];
 
 export interface ShapeBody {
