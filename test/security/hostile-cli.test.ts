@@ -10,7 +10,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { runCli } from '../../server/cli/main';
 import { errorLines, makeTempFolder, runCompiledCli } from '../../server/cli/cli-process.test-support';
-import { hostileFiles, TRACE_CARRIER_HZ, type HostileFile } from './corpus';
+import { hostileFiles, TRACE_CARRIER_HZ, validTraceCsv, type HostileFile } from './corpus';
+import { rawIq } from '../../server/uploads/upload-files.test-support';
 
 jest.setTimeout(300_000);
 
@@ -128,6 +129,48 @@ test(`analyze-trace refuses ${HOSTILE_MASKS.length} hostile mask files the same 
   }
   expect(failures).toEqual([]);
   expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+});
+
+test('hostile command-line values (NaN, 1e999, negative or absurd rates and lengths, folders and devices as files) exit non-zero with one line (in-process)', async () => {
+  const trace = path.join(temp.folder, 'args.csv');
+  const capture = path.join(temp.folder, 'args.cf32');
+  const mask = path.join(temp.folder, 'args-mask.json');
+  fs.writeFileSync(trace, validTraceCsv());
+  fs.writeFileSync(capture, rawIq({ sampleRateHz: 48_000, sampleCount: 4096, sideband: 'usb', tones: [{ audioHz: 1000, levelDbfs: -6 }] }, 'cf32_le').bytes);
+  fs.writeFileSync(mask, JSON.stringify(MASK));
+  const iq = (...extra: string[]) => ['analyze-iq', capture, '--format', 'cf32', ...extra];
+  const tr = (center: string, reference: string, ...extra: string[]) => ['analyze-trace', trace, '--mask', mask, '--center-hz', center, '--reference-dbm', reference, ...extra];
+  const cases: [string, string[]][] = [
+    ['rate NaN', iq('--rate', 'NaN')],
+    ['rate 1e999', iq('--rate', '1e999')],
+    ['rate negative', iq('--rate', '-48000')],
+    ['rate 5e-324 Hz', iq('--rate', '5e-324')],
+    ['rate 1e308 Hz', iq('--rate', '1e308')],
+    ['rate missing for raw samples', iq()],
+    ['segment length 1e12', iq('--rate', '48000', '--segment-length', '1e12')],
+    ['segment length 3', iq('--rate', '48000', '--segment-length', '3')],
+    ['full scale 1e999', iq('--rate', '48000', '--full-scale-dbm', '1e999')],
+    ['sideband with a quote', iq('--rate', '48000', '--sideband', "usb'")],
+    ['format mp3', ['analyze-iq', capture, '--format', 'mp3']],
+    ['a folder as the capture', ['analyze-iq', temp.folder, '--format', 'cf32', '--rate', '48000']],
+    ['/dev/null as the capture', ['analyze-iq', '/dev/null', '--format', 'cf32', '--rate', '48000']],
+    ['a file that does not exist', ['analyze-iq', path.join(temp.folder, 'none.cf32'), '--format', 'cf32', '--rate', '48000']],
+    ['centre 1e999', tr('1e999', '40')],
+    ['reference NaN', tr(String(TRACE_CARRIER_HZ), 'NaN')],
+    ['/etc/passwd as the mask', ['analyze-trace', trace, '--mask', '/etc/passwd', '--center-hz', String(TRACE_CARRIER_HZ), '--reference-dbm', '40']],
+    ['a folder as the trace', ['analyze-trace', temp.folder, '--mask', mask, '--center-hz', String(TRACE_CARRIER_HZ), '--reference-dbm', '40']],
+    ['an unknown option', tr(String(TRACE_CARRIER_HZ), '40', '--bogus')],
+    ['two files', ['analyze-trace', trace, trace, '--mask', mask, '--center-hz', String(TRACE_CARRIER_HZ), '--reference-dbm', '40']],
+    ['an unknown command', ['analyse-everything', trace]],
+  ];
+  const failures: { input: string; problem: string; stderr: string }[] = [];
+  for (const [label, argv] of cases) {
+    const run = await runInProcess(argv);
+    const problem = badRefusal(run.code, run.stderr);
+    if (problem) failures.push({ input: label, problem, stderr: run.stderr.slice(0, 300) });
+  }
+  console.log(`hostile-cli: ${cases.length} hostile command lines`);
+  expect(failures).toEqual([]);
 });
 
 test('as a real process (scripts/run-cli.js, as `npm run -s sidecheck` runs it): a handful exit non-zero with one line, within a timeout', async () => {
