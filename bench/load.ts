@@ -25,7 +25,8 @@
  *  2. capacity: the mix, closed loop (each connection sends the next request when the last is
  *     answered) with --connections per API process: the most this machine sustains.
  *  3. at the target rate: the same mix at --rate requests/s in total (ten autocannon instances,
- *     staggered by 100 ms so their per-second rate windows do not all open at once).
+ *     staggered by 100 ms so their per-second rate windows do not all open at once); then at half
+ *     the capacity measured in 2, to show the latency of a machine that is not saturated.
  *  4. scale: sequential run-list requests in labs of 100, 1,000 and 10,000 runs.
  *  (--per-kind: before 2, each kind alone, closed loop, with the server CPU it costs per request.)
  * The mix, by count of requests: run lists with filters, sorts and pages 45 %, reading saves on
@@ -33,8 +34,10 @@
  * CSV uploads 5 %, sign-ins 3 %. Requests alternate between the two API processes by instance
  * (one autocannon per process): no load balancer in between.
  *
- * autocannon runs in this process and shares the machine's cores with the servers and
- * PostgreSQL, so the figures are a floor for what the server alone could do.
+ * Each phase also prints the CPU time the API processes and PostgreSQL spent per request (from
+ * /proc; PostgreSQL's only for the private cluster), which depends far less than throughput on
+ * what else the machine is doing. autocannon runs in this process and shares the machine's cores
+ * with the servers and PostgreSQL, so throughput figures are a floor for the server alone.
  */
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
@@ -44,7 +47,7 @@ import { createSequelize } from '../server/db/sequelize';
 import { initModels } from '../server/db/models';
 import { asSystem } from '../server/tenancy/tenant-transaction';
 import { demoMaskTrace } from '../server/demo/demo-mask-trace';
-import { seedVolume, volumeEmail, volumeLabs, VOLUME_PASSWORD } from './seed-volume';
+import { seedVolume, volumeLabs, VOLUME_PASSWORD } from './seed-volume';
 
 const ROOT = path.resolve(__dirname, '..');
 const TARGETS = { sustainedRps: 300, listP99Ms: 100, saveP99Ms: 100, errors: 0, bareFraction: 0.5 };
@@ -573,6 +576,12 @@ async function main(): Promise<void> {
     printTally(`at the target rate: the mix at ${args.rate} req/s offered, 2 API processes, ${args.durationS} s`, atRate, MIX.map((m) => m.kind));
     failed += atRate.failed() + atRate.socketErrors + atRate.timeouts;
 
+    // 3b. Half the measured capacity: the latency when the machine is not saturated.
+    const halfRate = Math.max(10, Math.round(capacity.count() / capacity.seconds / 2 / 10) * 10);
+    const atHalf = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 5, connections: 4, durationS: args.durationS, overallRate: halfRate, choose: weightedKind, build }));
+    printTally(`at half the measured capacity: the mix at ${halfRate} req/s offered, 2 API processes, ${args.durationS} s`, atHalf, MIX.map((m) => m.kind));
+    failed += atHalf.failed() + atHalf.socketErrors + atHalf.timeouts;
+
     // 4. Scale: list latency by lab size, one request at a time.
     const scale: { runs: number; first: { p50: number; p99: number }; byClient: { p50: number; p99: number } }[] = [];
     for (const runs of [100, 1_000, 10_000]) {
@@ -594,6 +603,7 @@ async function main(): Promise<void> {
     log(`  at ${args.rate} req/s offered: served                 ${fmt(rateRps, 0)} req/s | ${args.rate}`);
     log(`  p99 run lists at the target rate               ${fmt(atRate.percentile(99, 'list'), 1)} ms | < ${TARGETS.listP99Ms} ms`);
     log(`  p99 reading saves at the target rate           ${fmt(atRate.percentile(99, 'save'), 1)} ms | < ${TARGETS.saveP99Ms} ms`);
+    log(`  p99 run lists / saves at ${halfRate} req/s (half the capacity) ${fmt(atHalf.percentile(99, 'list'), 1)} / ${fmt(atHalf.percentile(99, 'save'), 1)} ms | < ${TARGETS.listP99Ms} ms`);
     log(`  failed requests (non-2xx, socket errors, timeouts) ${failed} | ${TARGETS.errors}`);
     log(`  bare Express + pg primary-key endpoint         ${fmt(bareRps, 0)} req/s`);
     log(`  the mix as a fraction of the bare endpoint     ${fmt(capRps / bareRps, 2)} | >= ${TARGETS.bareFraction}`);
@@ -608,6 +618,7 @@ async function main(): Promise<void> {
           capacityRps: Math.round(capRps),
           listOnlyRps: Math.round(listRps),
           atRate: { offered: args.rate, served: Math.round(rateRps), listP99Ms: +atRate.percentile(99, 'list').toFixed(1), saveP99Ms: +atRate.percentile(99, 'save').toFixed(1) },
+          atHalfCapacity: { offered: halfRate, served: Math.round(atHalf.count() / atHalf.seconds), listP99Ms: +atHalf.percentile(99, 'list').toFixed(1), saveP99Ms: +atHalf.percentile(99, 'save').toFixed(1) },
           capacityP99Ms: Object.fromEntries(MIX.map((m) => [m.kind, +capacity.percentile(99, m.kind).toFixed(1)])),
           cpuMsPerRequest: { bare: bare.cpu, capacity: capacity.cpu, listOnly: listOnly.cpu, atRate: atRate.cpu },
           failed,
