@@ -2,6 +2,9 @@
 // Angular client (jsdom). See DEVELOPERS.md for how the test command drives them.
 const tsJest = ['ts-jest', { tsconfig: '<rootDir>/tsconfig.spec.json', isolatedModules: true }];
 module.exports = {
+  // Jest reads testTimeout from the top level only (a project's own setting is ignored): real
+  // signing, PDF work and browsers on a busy 2-core machine need more than the default 5 s.
+  testTimeout: 60_000,
   projects: [
     {
       displayName: 'shared',
