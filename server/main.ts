@@ -4,7 +4,8 @@ import { createSequelize } from './db/sequelize';
 import { initModels } from './db/models';
 import { createMigrator } from './db/migrate';
 import { buildApp } from './app';
-import { createMailer } from './mail/mailer';
+import type { Transaction } from 'sequelize';
+import { createMailer, type OutgoingMail } from './mail/mailer';
 import { enqueueMail, startMailQueue, startMailWorker } from './mail/mail-queue';
 import { createPaymentClient } from './billing/payment-client';
 import { startCalibrationDueJob } from './instruments/calibration-due-job';
@@ -18,27 +19,28 @@ async function main() {
   if (pending.length) throw new Error(`database has ${pending.length} pending migration(s): run npm run db:migrate`);
   const boss = await startMailQueue(config.databaseUrl, { retryDelaySeconds: config.smtp.retryDelaySeconds });
   await startMailWorker(boss, createMailer(config.smtp));
-  const mailRetry = { retryDelaySeconds: config.smtp.retryDelaySeconds };
-  await startCalibrationDueJob(boss, { sequelize, publicUrl: config.publicUrl, enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail, mailRetry) });
+  // Every sender enqueues the same way: in the caller's transaction, with the configured retry delay.
+  const enqueue = (transaction: Transaction | null, mail: OutgoingMail) => enqueueMail(boss, transaction, mail, { retryDelaySeconds: config.smtp.retryDelaySeconds });
+  await startCalibrationDueJob(boss, { sequelize, publicUrl: config.publicUrl, enqueueMail: enqueue });
   const app = buildApp({
     sequelize,
     tokens: { secret: config.jwtSecret, accessTtlSeconds: config.accessTokenTtlSeconds, refreshTtlSeconds: config.refreshTokenTtlSeconds },
     secureCookies: config.secureCookies,
     clientDistDir: config.clientDistDir,
     publicUrl: config.publicUrl,
-    mail: { enqueue: (transaction, mail) => enqueueMail(boss, transaction, mail, mailRetry) },
+    mail: { enqueue },
     reports: {
       sequelize,
       publicUrl: config.publicUrl,
       keyEncryptionSecret: config.keyEncryptionSecret,
-      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail, mailRetry),
+      enqueueMail: enqueue,
     },
     billing: {
       sequelize,
       payments: createPaymentClient(config.payments),
       webhookSecret: config.payments.webhookSecret,
       publicUrl: config.publicUrl,
-      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail, mailRetry),
+      enqueueMail: enqueue,
     },
   });
   const server = app.listen(config.port, config.host, () => {

@@ -49,18 +49,19 @@ export async function startTestApp(options: { accessTtlSeconds?: number; mail?: 
   await ensureBuiltInRuleSets(sequelize);
   const boss = await startMailQueue(url);
   const logs: Record<string, unknown>[] = [];
+  const enqueue: MailSender['enqueue'] = (transaction, mail) => enqueueMail(boss, transaction, mail);
   const app = buildApp({
     sequelize,
     tokens: { secret: TEST_JWT_SECRET, accessTtlSeconds: options.accessTtlSeconds ?? 600, refreshTtlSeconds: 3600 },
     secureCookies: options.secureCookies ?? false,
     log: (entry) => logs.push(entry),
     publicUrl: 'http://127.0.0.1:4610',
-    mail: options.mail ?? { enqueue: (transaction, mail) => enqueueMail(boss, transaction, mail) },
+    mail: options.mail ?? { enqueue },
     reports: {
       sequelize,
       publicUrl: 'http://127.0.0.1:4610',
       keyEncryptionSecret: 'test-only-key-encryption-secret',
-      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
+      enqueueMail: enqueue,
     },
     billing: {
       sequelize,
@@ -70,7 +71,7 @@ export async function startTestApp(options: { accessTtlSeconds?: number; mail?: 
       ),
       webhookSecret: options.payments?.webhookSecret ?? 'whsec_test_only',
       publicUrl: 'http://127.0.0.1:4610',
-      enqueueMail: (transaction, mail) => enqueueMail(boss, transaction, mail),
+      enqueueMail: enqueue,
     },
   });
   return {
