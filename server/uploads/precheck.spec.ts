@@ -41,9 +41,16 @@ async function maker(role: 'manufacturer-admin' | 'manufacturer-viewer' = 'manuf
   return { s, auth: { token, org: s.maker.id } };
 }
 
-const totals = () =>
+/**
+ * The rows of this scenario's two organizations. Counted per organization, not over the whole
+ * table: the other API spec files run in parallel on the same database and store results of their own.
+ */
+const totals = (orgIds: string[]) =>
   asSystem(t.sequelize, async (transaction) => {
-    const [row] = await t.sequelize.query<Record<string, string>>('SELECT (SELECT count(*) FROM uploads) AS uploads, (SELECT count(*) FROM results) AS results, (SELECT count(*) FROM reports) AS reports', { type: QueryTypes.SELECT, transaction });
+    const [row] = await t.sequelize.query<Record<string, string>>(
+      'SELECT (SELECT count(*) FROM uploads WHERE organization_id IN (:orgIds)) AS uploads, (SELECT count(*) FROM results WHERE organization_id IN (:orgIds)) AS results, (SELECT count(*) FROM reports WHERE organization_id IN (:orgIds)) AS reports',
+      { type: QueryTypes.SELECT, transaction, replacements: { orgIds } },
+    );
     return row;
   });
 
@@ -53,7 +60,8 @@ describe('POST /precheck', () => {
     // A one-tone capture with a 1° quadrature error: IRR = cot²(0.5°) = 41.18 dB (phasing relation,
     // published), carrier 42 dB below PEP.
     const { meta, data, truth } = await sigmfPair({ sampleRateHz: 48_000, sampleCount: 96_000, sideband: 'usb', tones: [{ audioHz: 1000, levelDbfs: -6 }], phaseErrorDeg: 1, carrierLeakBelowPepDb: 42, noise: { powerDbfs: -95, seed: 2 } });
-    const before = { rows: await totals(), files: await storedFiles(dataDir) };
+    const orgs = [m.s.lab.id, m.s.maker.id];
+    const before = { rows: await totals(orgs), files: await storedFiles(dataDir) };
     const res = await postFiles(t.app, '/precheck', m.auth, { file: { bytes: meta, name: 'mine.sigmf-meta' }, data: { bytes: data, name: 'mine.sigmf-data' }, fields: { ruleSetId: sampleIds['us-maritime-hf-ssb'] } });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ unaccredited: true, notice: PRECHECK_NOTICE, ruleSet: { key: 'us-maritime-hf-ssb' }, format: 'sigmf' });
@@ -69,7 +77,7 @@ describe('POST /precheck', () => {
     expect(check('intermodulation').problem).toMatch(/two equal audio tones/);
     expect(res.body.phasing.phaseErrorAloneDeg).toBeCloseTo(1, 0);
     expect(res.body.phasing.meetsRequirement).toBe(true);
-    expect(await totals()).toEqual(before.rows);
+    expect(await totals(orgs)).toEqual(before.rows);
     expect(await storedFiles(dataDir)).toEqual(before.files);
   });
 
