@@ -34,6 +34,7 @@ npx tsx server/db/migrate-cli.ts up && npx tsx server/mail/prepare-queue-cli.ts 
 step "type check"
 npx tsc -p tsconfig.check.json || status=1
 npx tsc -p tsconfig.app.json --noEmit || status=1
+npx tsc -p tsconfig.spec-check.json || status=1
 
 step "unit tests: shared library and client"
 npx jest --selectProjects shared client --json --outputFile=artifacts/test-results/unit.json || status=1
