@@ -8,7 +8,8 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { SessionStore } from '../session/session-store';
-import { problemFieldErrors, problemMessage } from '../session/problem-message';
+import { problemMessage } from '../session/problem-message';
+import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { AccountFrame } from './account-frame';
 import { AccountsApi, type InvitationLookup } from './accounts-api';
 import { PASSWORD_RULE_TEXT, passwordStrength } from './password-strength';
@@ -36,7 +37,6 @@ export class AcceptInvitationPage implements OnInit {
   protected readonly loading = signal(true);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
-  protected readonly fieldErrors = signal<Record<string, string>>({});
   /** Set once an existing account has accepted: it signs in as usual next. */
   protected readonly joined = signal(false);
   protected readonly form = inject(NonNullableFormBuilder).group({
@@ -60,6 +60,7 @@ export class AcceptInvitationPage implements OnInit {
   async accept(): Promise<void> {
     const found = this.invitation();
     if (!found) return;
+    clearServerErrors(this.form);
     if (!found.accountExists && this.form.invalid) {
       this.form.markAllAsTouched();
       return;
@@ -79,8 +80,7 @@ export class AcceptInvitationPage implements OnInit {
       await this.session.refresh();
       await this.router.navigateByUrl(accepted.kind === 'auditor' ? '/auditor' : found.organizationKind === 'lab' ? '/' : '/reports');
     } catch (error) {
-      this.error.set(problemMessage(error));
-      this.fieldErrors.set(problemFieldErrors(error));
+      this.error.set(showProblemOnForm(this.form, error));
     } finally {
       this.busy.set(false);
     }

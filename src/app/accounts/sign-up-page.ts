@@ -7,7 +7,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { SessionStore } from '../session/session-store';
-import { problemFieldErrors, problemMessage } from '../session/problem-message';
+import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { AccountFrame } from './account-frame';
 import { AccountsApi } from './accounts-api';
 import { addressLines } from './address-lines';
@@ -28,7 +28,6 @@ export class SignUpPage {
   protected readonly passwordRule = PASSWORD_RULE_TEXT;
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
-  protected readonly fieldErrors = signal<Record<string, string>>({});
   protected readonly form = inject(NonNullableFormBuilder).group({
     labName: ['', [Validators.required, Validators.maxLength(200), Validators.pattern(/\S/)]],
     labCode: ['', Validators.pattern(/^[A-Za-z0-9]{2,8}$/)],
@@ -39,6 +38,7 @@ export class SignUpPage {
   });
 
   async signUp(): Promise<void> {
+    clearServerErrors(this.form);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       return;
@@ -46,7 +46,6 @@ export class SignUpPage {
     const v = this.form.getRawValue();
     this.busy.set(true);
     this.error.set(null);
-    this.fieldErrors.set({});
     try {
       const { organizationId } = await firstValueFrom(
         this.api.signUp({ labName: v.labName.trim(), labCode: v.labCode.trim() || undefined, address: addressLines(v.address).slice(0, 6), name: v.name.trim(), email: v.email.trim(), password: v.password }),
@@ -56,8 +55,7 @@ export class SignUpPage {
       await this.session.refresh();
       await this.router.navigateByUrl('/');
     } catch (error) {
-      this.error.set(problemMessage(error));
-      this.fieldErrors.set(problemFieldErrors(error));
+      this.error.set(showProblemOnForm(this.form, error));
     } finally {
       this.busy.set(false);
     }

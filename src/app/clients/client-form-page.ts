@@ -8,7 +8,8 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { SessionStore } from '../session/session-store';
-import { problemFieldErrors, problemMessage } from '../session/problem-message';
+import { problemMessage } from '../session/problem-message';
+import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { addressLines } from '../accounts/address-lines';
 import { ClientsApi, type Client } from './clients-api';
 
@@ -34,7 +35,6 @@ export class ClientFormPage implements OnInit {
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly notice = signal<string | null>(null);
-  protected readonly fieldErrors = signal<Record<string, string>>({});
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: ['', [Validators.required, Validators.maxLength(200)]],
     address: [''],
@@ -61,6 +61,7 @@ export class ClientFormPage implements OnInit {
   }
 
   save(): void {
+    clearServerErrors(this.form);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       return;
@@ -73,8 +74,7 @@ export class ClientFormPage implements OnInit {
     (id ? this.api.update(id, body) : this.api.create(body)).subscribe({
       next: () => void this.router.navigate(['/clients']),
       error: (error) => {
-        this.error.set(problemMessage(error));
-        this.fieldErrors.set(problemFieldErrors(error));
+        this.error.set(showProblemOnForm(this.form, error, { addressLines: 'address' }));
         this.busy.set(false);
       },
     });

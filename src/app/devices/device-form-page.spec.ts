@@ -144,6 +144,21 @@ describe('DeviceFormPage', () => {
     expect(navigate).toHaveBeenCalledWith(['/devices']);
   });
 
+  it('shows a field error of the server under the field it names, in MHz as on screen', async () => {
+    const { fixture, el } = await render('dev-9');
+    http.expectOne('/api/devices/dev-9').flush(stored);
+    await fixture.whenStable();
+    submit(el);
+    // server/devices/device-checks.ts names the body's field in Hz; the form shows it in MHz.
+    http.expectOne({ method: 'PUT', url: '/api/devices/dev-9' }).flush(...problem(422, 'The highest frequency is below the lowest.', [{ pointer: '/frequencyMaxHz', message: 'must be at least the lowest frequency' }]));
+    await fixture.whenStable();
+    const loader = TestbedHarnessEnvironment.loader(fixture);
+    expect(await fieldErrors(loader, 'Highest frequency')).toEqual(['Must be at least the lowest frequency']);
+    expect(await fieldErrors(loader, 'Lowest frequency')).toEqual([]);
+    // The product's own wording.
+    expect(alerts(el)).toEqual(['Correct the field marked below and try again.']);
+  });
+
   it('shows the server’s refusal of a change and lets the person try again', async () => {
     const { fixture, el } = await render('dev-9');
     http.expectOne('/api/devices/dev-9').flush(stored);

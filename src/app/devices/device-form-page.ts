@@ -9,7 +9,8 @@ import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { DevicesApi, type ClientRow } from './devices-api';
 import type { CreateDeviceBody } from '../../../shared/schemas/records';
-import { problemFieldErrors, problemMessage } from '../session/problem-message';
+import { problemMessage } from '../session/problem-message';
+import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { parseEmissionDesignator } from '../../../shared/bandwidth/emission-designator';
 
 function designator(control: AbstractControl): ValidationErrors | null {
@@ -41,7 +42,6 @@ export class DeviceFormPage implements OnInit {
   protected readonly clients = signal<ClientRow[]>([]);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
-  protected readonly fieldErrors = signal<Record<string, string>>({});
   protected readonly form = inject(NonNullableFormBuilder).group({
     clientId: ['', Validators.required],
     manufacturer: ['', [Validators.required, Validators.maxLength(200)]],
@@ -99,6 +99,7 @@ export class DeviceFormPage implements OnInit {
   }
 
   save(): void {
+    clearServerErrors(this.form);
     const v = this.form.getRawValue();
     const modes = [...(v.usb ? ['USB' as const] : []), ...(v.lsb ? ['LSB' as const] : [])];
     if (this.form.invalid || modes.length === 0) {
@@ -126,8 +127,7 @@ export class DeviceFormPage implements OnInit {
     (id ? this.api.update(id, body) : this.api.create(body)).subscribe({
       next: (device) => void (id ? this.router.navigate(['/devices']) : this.router.navigate(['/plans/new'], { queryParams: { deviceId: device.id } })),
       error: (error) => {
-        this.error.set(problemMessage(error));
-        this.fieldErrors.set(problemFieldErrors(error));
+        this.error.set(showProblemOnForm(this.form, error, { frequencyMinHz: 'frequencyMinMHz', frequencyMaxHz: 'frequencyMaxMHz' }));
         this.busy.set(false);
       },
     });

@@ -143,10 +143,28 @@ describe('InstrumentFormPage', () => {
     await fillIdentity(loader);
     await (await inputLabelled(loader, 'Contribution')).setValue('Sensor linearity');
     submit(el);
-    http.expectOne('/api/instruments').flush(...problem(422, 'The calibration date cannot be after today.', [{ pointer: '/calibratedOn', message: 'must not be after today' }]));
+    // The server judges "today" by its own clock (server/instruments/instrument-checks.ts), which can be a day ahead of the browser's.
+    http.expectOne('/api/instruments').flush(...problem(422, 'The instrument has 1 problem: /calibratedOn must not be after today (2026-01-09).', [{ pointer: '/calibratedOn', message: 'must not be after today (2026-01-09)' }]));
     await fixture.whenStable();
-    expect(alerts(el)).toEqual(['The calibration date cannot be after today.']);
+    // The server's words under the field the browser thought valid; the banner points at it (the product's own wording).
+    expect(await errorsOf(loader, 'Calibrated on')).toEqual(['Must not be after today (2026-01-09)']);
+    expect(alerts(el)).toEqual(['Correct the field marked below and try again.']);
     expect(navigate).not.toHaveBeenCalled();
     expect(el.querySelector<HTMLButtonElement>('button[type="submit"]')!.disabled).toBe(false);
+    // A changed date is judged afresh: the server's message goes and the form can be sent again.
+    await (await inputLabelled(loader, 'Calibrated on')).setValue('2026-01-08');
+    expect(await errorsOf(loader, 'Calibrated on')).toEqual([]);
+    submit(el);
+    expect(http.expectOne('/api/instruments').request.body.calibratedOn).toBe('2026-01-08');
+  });
+
+  it('keeps the server’s sentence in the banner when an error names no field of the form', async () => {
+    const { fixture, el, loader } = await render();
+    await fillIdentity(loader);
+    await (await inputLabelled(loader, 'Contribution')).setValue('Sensor linearity');
+    submit(el);
+    http.expectOne('/api/instruments').flush(...problem(422, 'The instrument has 1 problem: /owner must NOT have additional properties.', [{ pointer: '/owner', message: 'must NOT have additional properties' }]));
+    await fixture.whenStable();
+    expect(alerts(el)).toEqual(['The instrument has 1 problem: /owner must NOT have additional properties.']);
   });
 });

@@ -9,7 +9,8 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
-import { problemFieldErrors, problemMessage } from '../session/problem-message';
+import { problemMessage } from '../session/problem-message';
+import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { CalibrationChip } from './calibration-chip';
 import { BUDGETS, BUDGET_WORDS, DISTRIBUTION_WORDS, contributionBody, contributionGroup, contributionStandard } from './contribution-form';
 import { EquipmentApi, type Instrument } from './equipment-api';
@@ -39,7 +40,6 @@ export class InstrumentFormPage implements OnInit {
   protected readonly loading = signal(false);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
-  protected readonly fieldErrors = signal<Record<string, string>>({});
   protected readonly today = new Date().toISOString().slice(0, 10);
   protected readonly form = this.fb.nonNullable.group({
     name: ['', [Validators.required, Validators.maxLength(200)]],
@@ -86,6 +86,7 @@ export class InstrumentFormPage implements OnInit {
   }
 
   save(): void {
+    clearServerErrors(this.form);
     const v = this.form.getRawValue();
     if (this.form.invalid) {
       this.form.markAllAsTouched();
@@ -110,8 +111,7 @@ export class InstrumentFormPage implements OnInit {
     (id ? this.api.update(id, body) : this.api.create(body)).subscribe({
       next: () => void this.router.navigate(['/equipment']),
       error: (error) => {
-        this.error.set(problemMessage(error));
-        this.fieldErrors.set(problemFieldErrors(error));
+        this.error.set(showProblemOnForm(this.form, error));
         this.busy.set(false);
       },
     });

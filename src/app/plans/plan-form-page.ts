@@ -12,6 +12,7 @@ import { PlansApi, type RuleSetRow } from './plans-api';
 import { DevicesApi, type DeviceRow } from '../devices/devices-api';
 import { RunsApi } from '../runs/runs-api';
 import { problemMessage } from '../session/problem-message';
+import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { TEST_KINDS, TEST_KIND_LABELS, type TestKind } from '../../../shared/rules/test-kind';
 
 @Component({
@@ -74,6 +75,7 @@ export class PlanFormPage {
   }
 
   saveAndStart(): void {
+    clearServerErrors(this.form);
     if (this.form.invalid || this.form.controls.testPoints.length === 0) {
       this.form.markAllAsTouched();
       return;
@@ -92,7 +94,7 @@ export class PlanFormPage {
       .subscribe({
         next: (run) => void this.router.navigate(['/runs', run.id]),
         error: (error) => {
-          this.error.set(problemMessage(error));
+          this.error.set(showProblemOnForm(this.form, error, { frequencyHz: 'frequencyMHz' }));
           this.busy.set(false);
         },
       });

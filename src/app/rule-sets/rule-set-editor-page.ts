@@ -11,7 +11,8 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { SessionStore } from '../session/session-store';
-import { problemFieldErrors, problemMessage } from '../session/problem-message';
+import { problemMessage } from '../session/problem-message';
+import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { SCREEN_ROLES } from '../accounts/screen-roles';
 import { describeDecisionRule } from '../../../shared/uncertainty/describe-decision-rule';
 import type { DecisionRule } from '../../../shared/uncertainty/decision-rule';
@@ -60,7 +61,6 @@ export class RuleSetEditorPage {
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly notice = signal<string | null>(null);
-  protected readonly fieldErrors = signal<Record<string, string>>({});
   protected readonly canWrite = this.session.hasRole(...SCREEN_ROLES.labRecordsWrite);
   protected readonly editable = computed(() => this.canWrite && !!this.ruleSet() && !this.ruleSet()!.builtIn && this.isLatest());
   protected readonly isLatest = computed(() => {
@@ -131,6 +131,7 @@ export class RuleSetEditorPage {
     const r = this.ruleSet();
     const form = this.form();
     if (!r || !form) return;
+    clearServerErrors(form);
     if (form.invalid) {
       form.markAllAsTouched();
       this.error.set('Some fields need attention: see the messages beside them.');
@@ -153,8 +154,8 @@ export class RuleSetEditorPage {
       },
       error: (error) => {
         this.busy.set(false);
-        this.error.set(problemMessage(error));
-        this.fieldErrors.set(problemFieldErrors(error));
+        // The name is the one field the body names at the same place as the form; the rest stays in the banner.
+        this.error.set(showProblemOnForm(form, error));
       },
     });
   }

@@ -89,6 +89,26 @@ describe('LabDetailsPage', () => {
     expect(el.querySelector('[role="status"]')).toBeNull();
   });
 
+  it('shows a field error of the server under the field that looked valid, and the rest in the banner', async () => {
+    const { fixture, el, loader } = await render();
+    http.expectOne('/api/organization').flush(lab);
+    await fixture.whenStable();
+    submit(el);
+    // Pointers as ajv reports them through server/http/problem.ts (problem+json, RFC 9457).
+    http.expectOne({ method: 'PUT', url: '/api/organization' }).flush(
+      ...problem(422, 'The organization has 2 problems: /name must NOT have more than 200 characters.', [
+        { pointer: '/name', message: 'must NOT have more than 200 characters' },
+        { pointer: '/addressLines/1', message: 'must NOT have more than 200 characters' },
+      ]),
+    );
+    await fixture.whenStable();
+    expect(await errorsOf(loader, 'Lab name')).toEqual(['Must NOT have more than 200 characters']);
+    expect(await errorsOf(loader, 'Postal address')).toEqual(['Must NOT have more than 200 characters']);
+    // The product's own wording.
+    expect(alerts(el)).toEqual(['Correct the 2 fields marked below and try again.']);
+    expect(el.querySelector('[role="status"]')).toBeNull();
+  });
+
   it('offers no saving over details it could not read, and reads them again on request', async () => {
     const { fixture, el, loader, save } = await render();
     http.expectOne('/api/organization').flush(...problem(503, 'The database is restarting; try again in a minute.'));

@@ -4,7 +4,8 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { problemFieldErrors, problemMessage } from '../session/problem-message';
+import { problemMessage } from '../session/problem-message';
+import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { addressLines } from '../accounts/address-lines';
 import { LabDetailsApi } from './lab-details-api';
 
@@ -25,7 +26,6 @@ export class LabDetailsPage {
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly notice = signal<string | null>(null);
-  protected readonly fieldErrors = signal<Record<string, string>>({});
   protected readonly code = signal('');
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: ['', [Validators.required, Validators.maxLength(200), Validators.pattern(/\S/)]],
@@ -59,6 +59,7 @@ export class LabDetailsPage {
   }
 
   save(): void {
+    clearServerErrors(this.form);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       return;
@@ -74,8 +75,7 @@ export class LabDetailsPage {
       },
       error: (error) => {
         this.busy.set(false);
-        this.error.set(problemMessage(error));
-        this.fieldErrors.set(problemFieldErrors(error));
+        this.error.set(showProblemOnForm(this.form, error, { addressLines: 'address' }));
       },
     });
   }
