@@ -7,7 +7,7 @@
  *   npm run bench:load                 (60 s phases)
  *   npm run bench:load -- --quick      (10 s phases)
  *   node node_modules/tsx/dist/cli.mjs bench/load.ts [--quick] [--duration 60] [--rate 300]
- *        [--connections 16] [--reuse] [--keep-db] [--per-kind]
+ *        [--connections 16] [--reuse] [--keep-db] [--per-kind] [--kinds list,save]
  *
  * Works from a fresh clone after `npm run build` (or without it: when dist/server is missing the
  * server is compiled with tsc; the client is not needed, the API serves only /api here). Uses
@@ -28,7 +28,9 @@
  *     staggered by 100 ms so their per-second rate windows do not all open at once); then at half
  *     the capacity measured in 2, to show the latency of a machine that is not saturated.
  *  4. scale: sequential run-list requests in labs of 100, 1,000 and 10,000 runs.
- *  (--per-kind: before 2, each kind alone, closed loop, with the server CPU it costs per request.)
+ *  (--per-kind: before 2, each kind alone, closed loop, with the server CPU it costs per request.
+ *   --kinds list,save: only those kinds alone, then stop; for profiling, LOAD_API_NODE_ARGS adds
+ *   Node options to the API processes, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof".)
  * The mix, by count of requests: run lists with filters, sorts and pages 45 %, reading saves on
  * runs on the bench 25 %, run workspace (GET /runs/:id) 12 %, report PDF downloads 10 %, trace
  * CSV uploads 5 %, sign-ins 3 %. Requests alternate between the two API processes by instance
@@ -80,7 +82,7 @@ interface AcInstance {
 const autocannon = require('autocannon') as (options: AcOptions, done: (error: Error | null, result: AcResult) => void) => AcInstance;
 
 // ---------------------------------------------------------------------------------------------
-interface Args { quick: boolean; durationS: number; rate: number; connections: number; reuse: boolean; keepDb: boolean; perKind: boolean }
+interface Args { quick: boolean; durationS: number; rate: number; connections: number; reuse: boolean; keepDb: boolean; perKind: boolean; kinds: string[] | null }
 
 function readArgs(argv: string[]): Args {
   const value = (name: string) => {
@@ -95,7 +97,8 @@ function readArgs(argv: string[]): Args {
     connections: value('--connections') ?? 16,
     reuse: argv.includes('--reuse'),
     keepDb: argv.includes('--keep-db'),
-    perKind: argv.includes('--per-kind'),
+    perKind: argv.includes('--per-kind') || argv.includes('--kinds'),
+    kinds: argv.includes('--kinds') ? argv[argv.indexOf('--kinds') + 1].split(',') : null,
   };
 }
 
@@ -523,7 +526,7 @@ async function main(): Promise<void> {
     };
     const fakes = startNode('stand-ins', ['dist/server/fakes/main.js'], { ...appEnv, PAYMENTS_WEBHOOK_URL: `http://127.0.0.1:${ports.api[0]}/api/billing/webhook` });
     processes.push(fakes);
-    for (const [i, port] of ports.api.entries()) processes.push(startNode(`api ${i + 1}`, ['dist/server/server/main.js'], { ...appEnv, PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${ports.api[0]}` }));
+    for (const [i, port] of ports.api.entries()) processes.push(startNode(`api ${i + 1}`, [...(process.env.LOAD_API_NODE_ARGS?.split(' ').filter(Boolean) ?? []), 'dist/server/server/main.js'], { ...appEnv, PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${ports.api[0]}` }));
     for (const [i, port] of ports.bare.entries()) processes.push(startNode(`bare ${i + 1}`, [...process.execArgv, __filename, '--bare-server', String(port)], env));
     await waitForHttp(`http://127.0.0.1:${ports.smtpHttp}/`, fakes).catch(() => undefined);
     for (const [i, port] of ports.api.entries()) await waitForHttp(`http://127.0.0.1:${port}/api/health`, processes[1 + i]);
@@ -553,11 +556,16 @@ async function main(): Promise<void> {
 
     if (args.perKind) {
       log('\neach kind alone, closed loop, 8 connections x 2 API processes');
-      for (const { kind } of MIX) {
+      for (const { kind } of MIX.filter((m) => !args.kinds || args.kinds.includes(m.kind))) {
         const alone = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 1, connections: 8, durationS: args.quick ? 4 : 10, choose: () => kind, build }));
         failed += alone.failed() + alone.socketErrors + alone.timeouts;
         log(`  ${kind.padEnd(10)} ${fmt(alone.count() / alone.seconds, 1).padStart(7)} req/s  p50 ${fmt(alone.percentile(50), 1).padStart(6)} ms  p99 ${fmt(alone.percentile(99), 1).padStart(6)} ms  CPU per request: API ${fmt(alone.cpu!.apiMsPerRequest, 2)} ms, PostgreSQL ${fmt(alone.cpu!.pgMsPerRequest, 2)} ms${alone.failed() ? `  non-2xx ${alone.failed()}` : ''}`);
       }
+    }
+    if (args.kinds) {
+      // Profiling mode: the other phases are skipped (the processes stop normally, so --cpu-prof writes).
+      if (failed > 0) process.exitCode = 1;
+      return;
     }
 
     // 2. Capacity: the mix, closed loop.

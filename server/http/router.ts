@@ -32,18 +32,30 @@ export function resolveAccess(def: RouteDef, req: AuthedRequest): { organization
   return { organizationId: membership.organizationId, roles: membership.roles };
 }
 
+/** Whether the route's access rule is a membership that the database must confirm (below). */
+function needsMembership(def: RouteDef, req: AuthedRequest, organizationId: string | null): boolean {
+  return (def.access.kind === 'member' || def.access.kind === 'member-or-api-key') && !!req.principal && !!organizationId;
+}
+
+/** The roles held now, from the database; throws the problem when they no longer allow the route. */
+function confirmRoles(def: RouteDef, held: Role[] | null, claimed: Role[]): Role[] {
+  if (held === null) return claimed;
+  if (held.length === 0) throw notFound('The organization');
+  const access = def.access as { roles: readonly Role[] };
+  if (!held.some((r) => access.roles.includes(r))) throw forbidden('Your role in this organization does not allow this action.');
+  return held;
+}
+
 /**
  * The token's memberships decide quickly; the database has the last word, so a member removed or
- * given other roles loses access at once rather than when the access token expires.
+ * given other roles loses access at once rather than when the access token expires. For a route
+ * in a tenant transaction the check is the transaction's first statement, together with the
+ * tenant setting (server/tenancy/tenant-transaction.ts); for the others it is a query of its own.
  */
-async function currentAccess(def: RouteDef, req: AuthedRequest, claimed: { organizationId: string | null; roles: Role[] }) {
-  const access = def.access;
-  if ((access.kind !== 'member' && access.kind !== 'member-or-api-key') || !req.principal || !claimed.organizationId) return claimed;
-  const rows = await Membership.findAll({ where: { userId: req.principal.userId, organizationId: claimed.organizationId }, attributes: ['role'] });
-  if (rows.length === 0) throw notFound('The organization');
-  const roles = rows.map((r) => r.role as Role);
-  if (!roles.some((r) => access.roles.includes(r))) throw forbidden('Your role in this organization does not allow this action.');
-  return { organizationId: claimed.organizationId, roles };
+async function rolesOutsideTransaction(def: RouteDef, req: AuthedRequest, claimed: { organizationId: string | null; roles: Role[] }): Promise<Role[]> {
+  if (!needsMembership(def, req, claimed.organizationId)) return claimed.roles;
+  const rows = await Membership.findAll({ where: { userId: req.principal!.userId, organizationId: claimed.organizationId! }, attributes: ['role'] });
+  return confirmRoles(def, rows.map((r) => r.role as Role), claimed.roles);
 }
 
 function send(res: Response, value: unknown, status: number): void {
@@ -67,10 +79,10 @@ export function buildRouter(sequelize: Sequelize, routes: RouteDef[]): express.R
   const router = express.Router();
   for (const def of routes) {
     router[def.method](def.path, async (req: AuthedRequest, res: Response) => {
-      const { organizationId, roles } = await currentAccess(def, req, resolveAccess(def, req));
-      const body = def.bodySchema ? validate(def.bodySchema, req.body) : req.body;
+      const claimed = resolveAccess(def, req);
+      const { organizationId } = claimed;
       let status = def.method === 'post' ? 201 : 200;
-      const context = (transaction: RouteContext['transaction']): RouteContext => ({
+      const context = (transaction: RouteContext['transaction'], roles: Role[], body: unknown): RouteContext => ({
         req,
         res,
         principal: req.principal ?? null,
@@ -84,9 +96,15 @@ export function buildRouter(sequelize: Sequelize, routes: RouteDef[]): express.R
           status = code;
         },
       });
-      const value = def.transaction === 'none'
-        ? await def.handler(context(null))
-        : await inTenant(sequelize, organizationId, (t) => def.handler(context(t)));
+      const readBody = () => (def.bodySchema ? validate(def.bodySchema, req.body) : req.body);
+      let value: unknown;
+      if (def.transaction === 'none') {
+        const roles = await rolesOutsideTransaction(def, req, claimed);
+        value = await def.handler(context(null, roles, readBody()));
+      } else {
+        const memberId = needsMembership(def, req, organizationId) ? req.principal!.userId : null;
+        value = await inTenant(sequelize, organizationId, (t, held) => def.handler(context(t, confirmRoles(def, held, claimed.roles), readBody())), memberId);
+      }
       if (!res.headersSent) send(res, value, status);
     });
   }

@@ -7,6 +7,7 @@ import request from 'supertest';
 import { startTestApp, type TestApp } from '../../test/support/test-app';
 import { buildLabScenario, signIn } from '../../test/support/factories';
 import { Client, Device, TestPlan } from '../db/models';
+import { QueryTypes } from 'sequelize';
 import { asSystem } from '../tenancy/tenant-transaction';
 
 let t: TestApp;
@@ -87,5 +88,45 @@ describe('GET /api/runs', () => {
     expect(byClient.body.items.map((r: Row) => r.id)).toEqual([ids[1], ids[3], ids[5]].sort());
     const byModelDown = await get('?sort=-model&pageSize=6');
     expect(byModelDown.body.items.slice(0, 3).map((r: Row) => r.id)).toEqual([ids[1], ids[3], ids[5]].sort().reverse());
+  });
+
+  it('follows a renamed client and a changed device: sort and search keys on the run are rewritten', async () => {
+    const { s: scenario, get, ids } = await lab();
+    await asSystem(t.sequelize, async (transaction) => {
+      await Client.update({ name: 'Zebrafish Coastal' }, { where: { organizationId: scenario.lab.id, name: 'Aardvark Marine Radio' }, transaction });
+      await Device.update({ manufacturer: 'QQ Radio Works', model: 'QQ-4 renamed radio', serialNumber: 'SN-RENAMED-7' }, { where: { organizationId: scenario.lab.id, model: 'ZX-9 list test radio' }, transaction });
+    });
+    expect((await get('?search=aardvark')).body.total).toBe(0);
+    const renamed = await get('?search=zebrafish');
+    expect(renamed.body.total).toBe(3);
+    expect(renamed.body.items.every((r: Row) => r.client === 'Zebrafish Coastal' && r.model === 'QQ-4 renamed radio')).toBe(true);
+    expect((await get('?search=sn-renamed')).body.total).toBe(3);
+    // "Zebrafish" now sorts after the scenario's client: the other three runs come first.
+    const byClient = await get('?sort=client&pageSize=6');
+    expect(byClient.body.items.slice(3).map((r: Row) => r.id)).toEqual([ids[1], ids[3], ids[5]].sort());
+  });
+
+  it('keeps the per-state totals exact through new runs, moves between states and pages past the end', async () => {
+    const { s: scenario, get } = await lab();
+    const counts = () =>
+      asSystem(t.sequelize, (transaction) =>
+        t.sequelize.query<{ state: string; kept: string; counted: string }>(
+          `SELECT s.state, coalesce(k.n, 0) AS kept, count(r.id) AS counted
+             FROM unnest(ARRAY['draft','testing','in-review','approved','issued','withdrawn','superseded']) s(state)
+             LEFT JOIN run_state_counts k ON k.organization_id = :org AND k.state = s.state
+             LEFT JOIN test_runs r ON r.organization_id = :org AND r.state = s.state
+            GROUP BY s.state, k.n`,
+          { replacements: { org: scenario.lab.id }, type: QueryTypes.SELECT, transaction },
+        ),
+      );
+    for (const row of await counts()) expect(row.kept).toBe(row.counted);
+    expect((await get('')).body.total).toBe(6);
+    expect((await get('?state=testing,in-review')).body.total).toBe(6);
+    expect((await get('?state=in-review')).body.total).toBe(2);
+    // A page past the end is empty and still says how many there are.
+    const past = await get('?page=9&pageSize=4');
+    expect(past.body).toMatchObject({ items: [], total: 6, page: 9 });
+    // The engineer filter counts the matching runs themselves.
+    expect((await get(`?engineerId=${scenario.engineer.id}&state=testing`)).body.total).toBe(4);
   });
 });

@@ -5,13 +5,25 @@
  * tenant transaction sees no tenant rows at all, so forgetting the scope fails closed.
  */
 import type { Sequelize, Transaction } from 'sequelize';
+import type { Role } from '../../shared/access/roles';
+import { preparedRows } from '../db/prepared-query';
 
-export async function inTenant<T>(sequelize: Sequelize, organizationId: string | null, fn: (t: Transaction) => Promise<T>): Promise<T> {
+export async function inTenant<T>(
+  sequelize: Sequelize,
+  organizationId: string | null,
+  fn: (t: Transaction, roles: Role[] | null) => Promise<T>,
+  /** Also read, in the same statement, the roles this person holds in the organization now. */
+  memberId: string | null = null,
+): Promise<T> {
   return sequelize.transaction(async (t) => {
-    await sequelize.query("SELECT set_config('app.org_id', :org, true)", { replacements: { org: organizationId ?? '' }, transaction: t });
-    return fn(t);
+    const [row] = await preparedRows<{ roles: Role[] | null }>(t, TENANT_SETUP, [organizationId ?? '', memberId]);
+    return fn(t, row.roles);
   });
 }
+
+/** The tenant setting and (memberships have no row-level security) the caller's current roles, in one round trip. */
+const TENANT_SETUP = `SELECT set_config('app.org_id', $1, true) AS org,
+  CASE WHEN $2::uuid IS NULL THEN NULL ELSE ARRAY(SELECT role FROM memberships WHERE user_id = $2::uuid AND organization_id = nullif($1, '')::uuid) END AS roles`;
 
 /**
  * Work that legitimately spans organizations (public verification, payment webhooks, mail jobs,
