@@ -42,6 +42,7 @@ const EXPECTED: Record<string, Expect> = {
   'get /auditor/reports/:id/pdf': 'signed-in',
   'get /organization': EVERY_MEMBER,
   'put /organization': ['lab-admin', 'manufacturer-admin'],
+  'get /organization/mail-settings': ['lab-admin'],
   'put /organization/mail-settings': ['lab-admin'],
   'get /clients': LAB_ALL,
   'get /clients/:id': LAB_ALL,

@@ -51,3 +51,32 @@ it.each([
   expect(res.body.errors.map((e: { pointer: string }) => e.pointer)).toContain(pointer);
   expect((await admin('get', '/organization')).body.name).toBe(s.lab.name);
 });
+
+describe('GET /organization/mail-settings', () => {
+  it('reads a choice never made as off, then what the administrator saved, keeping the lab’s other settings', async () => {
+    const s = await buildLabScenario(t.sequelize);
+    await t.sequelize.query("UPDATE organizations SET settings = '{\"testSite\": \"Screened room 1 (invented)\"}' WHERE id = :id", { replacements: { id: s.lab.id } });
+    const admin = await callerFor(t.app, s.admin, s.lab.id);
+    const first = await admin('get', '/organization/mail-settings');
+    expect(first.status).toBe(200);
+    expect(first.body).toEqual({ attachPdfToEmail: false });
+    expect((await admin('put', '/organization/mail-settings', { attachPdfToEmail: true })).status).toBe(200);
+    expect((await admin('get', '/organization/mail-settings')).body).toEqual({ attachPdfToEmail: true });
+    const [row] = await t.sequelize.query<{ settings: Record<string, unknown> }>('SELECT settings FROM organizations WHERE id = :id', { replacements: { id: s.lab.id }, type: QueryTypes.SELECT });
+    expect(row.settings).toEqual({ testSite: 'Screened room 1 (invented)', attachPdfToEmail: true });
+    expect((await admin('put', '/organization/mail-settings', { attachPdfToEmail: false })).status).toBe(200);
+    expect((await admin('get', '/organization/mail-settings')).body).toEqual({ attachPdfToEmail: false });
+  });
+
+  it('answers for the active lab only, and only to its administrator', async () => {
+    const mine = await buildLabScenario(t.sequelize);
+    const other = await buildLabScenario(t.sequelize);
+    expect((await (await callerFor(t.app, other.admin, other.lab.id))('put', '/organization/mail-settings', { attachPdfToEmail: true })).status).toBe(200);
+    expect((await (await callerFor(t.app, mine.admin, mine.lab.id))('get', '/organization/mail-settings')).body).toEqual({ attachPdfToEmail: false });
+    // Naming an organization one is not a member of answers 404, as for every member route (server/access/route-access.spec.ts).
+    expect((await (await callerFor(t.app, mine.admin, other.lab.id))('get', '/organization/mail-settings')).status).toBe(404);
+    for (const user of [mine.engineer, mine.reviewer, mine.billing]) {
+      expect((await (await callerFor(t.app, user, mine.lab.id))('get', '/organization/mail-settings')).status).toBe(403);
+    }
+  });
+});

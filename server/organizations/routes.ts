@@ -10,6 +10,12 @@ export function presentOrganization(o: Organization) {
   return { id: o.id, kind: o.kind, name: o.name, code: o.code, addressLines: o.addressLines, email: o.email, phone: o.phone, accreditation: o.accreditation };
 }
 
+/** The lab's e-mail choices as GET and PUT /organization/mail-settings answer them; a choice never made reads as off. */
+export function presentMailSettings(o: Organization): MailSettingsBody {
+  const settings = (o.settings ?? {}) as Record<string, unknown>;
+  return { attachPdfToEmail: settings.attachPdfToEmail === true };
+}
+
 /**
  * GET/PUT /organization: the active organization's details (ISO/IEC 17025:2017 7.8.2.1 b: the
  * laboratory's name and address on every report). Reports already issued keep the details they
@@ -43,6 +49,17 @@ export function organizationRoutes(): RouteDef[] {
         return presentOrganization(org);
       },
     }),
+    route({
+      method: 'get',
+      path: '/organization/mail-settings',
+      summary: 'The lab’s e-mail choices: whether the report-issued e-mail carries the signed PDF (unset reads as false)',
+      access: { kind: 'member', roles: ['lab-admin'] },
+      async handler(ctx) {
+        const org = await Organization.findByPk(ctx.organizationId!);
+        if (!org) throw notFound('The organization');
+        return presentMailSettings(org);
+      },
+    }),
     route<MailSettingsBody>({
       method: 'put',
       path: '/organization/mail-settings',
@@ -53,7 +70,7 @@ export function organizationRoutes(): RouteDef[] {
         const org = await Organization.findByPk(ctx.organizationId!, { lock: true });
         if (!org) throw notFound('The organization');
         const settings = org.settings as Record<string, unknown>;
-        const before = { attachPdfToEmail: settings.attachPdfToEmail === true };
+        const before = presentMailSettings(org);
         // A new object, so Sequelize sees the JSON column change; other settings are kept.
         await org.update({ settings: { ...settings, attachPdfToEmail: ctx.body.attachPdfToEmail } });
         const after = { attachPdfToEmail: ctx.body.attachPdfToEmail };

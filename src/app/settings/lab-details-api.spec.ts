@@ -4,7 +4,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { firstValueFrom } from 'rxjs';
 import { LabDetailsApi, type LabDetails } from './lab-details-api';
 
-// The server's contract: GET and PUT /api/organization.
+// The server's contract: GET and PUT /api/organization and /api/organization/mail-settings (server/organizations/routes.ts).
 describe('LabDetailsApi', () => {
   let api: LabDetailsApi;
   let http: HttpTestingController;
@@ -35,5 +35,19 @@ describe('LabDetailsApi', () => {
     expect(req.request.body).not.toHaveProperty('code');
     req.flush(lab);
     expect((await saved).code).toBe('KBRTL');
+  });
+
+  it('reads and saves the lab’s e-mail choices', async () => {
+    const got = firstValueFrom(api.mailSettings());
+    const read = http.expectOne('/api/organization/mail-settings');
+    expect(read.request.method).toBe('GET');
+    read.flush({ attachPdfToEmail: false });
+    expect(await got).toEqual({ attachPdfToEmail: false });
+    const saved = firstValueFrom(api.saveMailSettings({ attachPdfToEmail: true }));
+    const write = http.expectOne('/api/organization/mail-settings');
+    expect(write.request.method).toBe('PUT');
+    expect(write.request.body).toEqual({ attachPdfToEmail: true });
+    write.flush({ attachPdfToEmail: true });
+    expect(await saved).toEqual({ attachPdfToEmail: true });
   });
 });

@@ -1,24 +1,30 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
+import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { problemMessage } from '../session/problem-message';
 import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { addressLines } from '../accounts/address-lines';
+import { SessionStore } from '../session/session-store';
 import { LabDetailsApi } from './lab-details-api';
 
-/** The lab's name, address, contact and accreditation as printed on every report it issues from now on. */
+/**
+ * The lab's name, address, contact and accreditation as printed on every report it issues from now
+ * on, and its e-mail choice: whether the report-issued e-mail carries the signed PDF.
+ */
 @Component({
   selector: 'sc-lab-details-page',
-  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule],
+  imports: [ReactiveFormsModule, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, MatProgressBarModule],
   templateUrl: './lab-details-page.html',
   styleUrl: './settings-section.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class LabDetailsPage {
   private readonly api = inject(LabDetailsApi);
+  private readonly session = inject(SessionStore);
 
   protected readonly loading = signal(true);
   /** Saving is offered only over details actually read, never over an empty form. */
@@ -35,8 +41,59 @@ export class LabDetailsPage {
     accreditation: ['', Validators.maxLength(200)],
   });
 
+  /** PUT and GET /organization/mail-settings admit lab administrators only (server/organizations/routes.ts). */
+  protected readonly canChangeMail = computed(() => this.session.hasRole('lab-admin'));
+  protected readonly mailLoading = signal(false);
+  protected readonly mailLoaded = signal(false);
+  protected readonly mailBusy = signal(false);
+  protected readonly mailError = signal<string | null>(null);
+  protected readonly mailNotice = signal<string | null>(null);
+  protected readonly mailForm = inject(NonNullableFormBuilder).group({ attachPdfToEmail: [false] });
+
   constructor() {
     this.load();
+    this.mailForm.disable();
+    if (this.canChangeMail()) this.loadMail();
+  }
+
+  loadMail(): void {
+    this.mailLoading.set(true);
+    this.mailError.set(null);
+    this.api.mailSettings().subscribe({
+      next: (settings) => {
+        this.mailForm.setValue({ attachPdfToEmail: settings.attachPdfToEmail });
+        this.mailForm.enable();
+        this.mailLoading.set(false);
+        this.mailLoaded.set(true);
+      },
+      error: (error) => {
+        this.mailError.set(problemMessage(error));
+        this.mailLoading.set(false);
+      },
+    });
+  }
+
+  saveMail(): void {
+    if (!this.mailLoaded() || !this.canChangeMail()) return;
+    const { attachPdfToEmail } = this.mailForm.getRawValue();
+    this.mailBusy.set(true);
+    this.mailError.set(null);
+    this.mailNotice.set(null);
+    this.api.saveMailSettings({ attachPdfToEmail }).subscribe({
+      next: (saved) => {
+        this.mailBusy.set(false);
+        this.mailForm.setValue({ attachPdfToEmail: saved.attachPdfToEmail });
+        this.mailNotice.set(
+          saved.attachPdfToEmail
+            ? 'Saved. Report e-mails sent from now on carry the signed PDF.'
+            : 'Saved. Report e-mails sent from now on ask the client to sign in and download the signed PDF.',
+        );
+      },
+      error: (error) => {
+        this.mailBusy.set(false);
+        this.mailError.set(problemMessage(error));
+      },
+    });
   }
 
   load(): void {
