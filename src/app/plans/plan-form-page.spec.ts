@@ -154,12 +154,75 @@ describe('PlanFormPage', () => {
     expect(navigate).not.toHaveBeenCalled();
   });
 
-  it('shows why the devices could not be listed', async () => {
+  it('shows that it is loading the devices and rule sets, and offers no saving until both are read', async () => {
+    deviceId = 'dev-1';
     const fixture = TestBed.createComponent(PlanFormPage);
     await fixture.whenStable();
-    http.expectOne((r) => r.url === '/api/devices').flush(...problem(403, 'Only lab members may plan tests.'));
-    http.expectOne((r) => r.url === '/api/rule-sets').flush({ items: [] });
+    const el = fixture.nativeElement as HTMLElement;
+    expect(el.querySelector('mat-progress-bar[aria-label="Loading the devices and rule sets"]')).not.toBeNull();
+    expect(el.querySelector<HTMLButtonElement>('button[type="submit"]')!.disabled).toBe(true);
+    submit(el);
+    http.expectNone('/api/plans');
+    http.expectOne((r) => r.url === '/api/devices').flush({ items: [device(1)], total: 1, page: 1, pageSize: 200 });
     await fixture.whenStable();
-    expect(alerts(fixture.nativeElement)).toEqual(['Only lab members may plan tests.']);
+    // One list alone is not enough to build a plan.
+    expect(el.querySelector('mat-progress-bar[aria-label="Loading the devices and rule sets"]')).not.toBeNull();
+    expect(el.querySelector<HTMLButtonElement>('button[type="submit"]')!.disabled).toBe(true);
+    http.expectOne((r) => r.url === '/api/rule-sets').flush({ items: ruleSets });
+    await fixture.whenStable();
+    expect(el.querySelector('mat-progress-bar')).toBeNull();
+    expect(el.querySelector<HTMLButtonElement>('button[type="submit"]')!.disabled).toBe(false);
+  });
+
+  it('shows why the devices could not be listed, and lists them again on request', async () => {
+    deviceId = 'dev-2';
+    const fixture = TestBed.createComponent(PlanFormPage);
+    await fixture.whenStable();
+    const el = fixture.nativeElement as HTMLElement;
+    http.expectOne((r) => r.url === '/api/devices').flush(...problem(403, 'Only lab members may plan tests.'));
+    // The rule sets' request is given up with the failed one; both are asked again on retry.
+    expect(http.expectOne((r) => r.url === '/api/rule-sets').cancelled).toBe(true);
+    await fixture.whenStable();
+    expect(alerts(el)).toEqual(['Only lab members may plan tests. Try again']);
+    expect(el.querySelector('mat-progress-bar')).toBeNull();
+    expect(el.querySelector<HTMLButtonElement>('button[type="submit"]')!.disabled).toBe(true);
+    buttonNamed(el, 'Try again').click();
+    await fixture.whenStable();
+    expect(alerts(el)).toEqual([]);
+    expect(el.querySelector('mat-progress-bar[aria-label="Loading the devices and rule sets"]')).not.toBeNull();
+    http.expectOne((r) => r.url === '/api/devices').flush({ items: [device(1), device(2)], total: 2, page: 1, pageSize: 200 });
+    http.expectOne((r) => r.url === '/api/rule-sets').flush({ items: ruleSets });
+    await fixture.whenStable();
+    expect(el.querySelector<HTMLButtonElement>('button[type="submit"]')!.disabled).toBe(false);
+    const loader = TestbedHarnessEnvironment.loader(fixture);
+    const devices = (await (await loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: 'Device under test' }))).getControl(MatSelectHarness))!;
+    expect(await devices.getValueText()).toBe('HX-20 · s/n SN-2');
+  });
+
+  it('shows why the rule sets could not be listed', async () => {
+    const fixture = TestBed.createComponent(PlanFormPage);
+    await fixture.whenStable();
+    http.expectOne((r) => r.url === '/api/devices').flush({ items: [device(1)], total: 1, page: 1, pageSize: 200 });
+    http.expectOne((r) => r.url === '/api/rule-sets').flush(null, { status: 0, statusText: 'Unknown Error' });
+    await fixture.whenStable();
+    // The product's own wording for a network failure (session/problem-message.ts).
+    expect(alerts(fixture.nativeElement)).toEqual(['Sidecheck cannot be reached. Check your connection and try again. Try again']);
+  });
+
+  it('puts the server’s field errors under the test point they name', async () => {
+    deviceId = 'dev-1';
+    const { fixture, el, loader } = await render();
+    submit(el);
+    // Pointers into the request body (frequencyHz in the API, MHz on screen), as server/http/problem.ts writes them.
+    http.expectOne('/api/plans').flush(...problem(422, 'The plan has 2 problems: /testPoints/0/frequencyHz must be >= 1000.', [
+      { pointer: '/testPoints/0/frequencyHz', message: 'must be >= 1000' },
+      { pointer: '/deviceId', message: 'is not one of your devices' },
+    ]));
+    await fixture.whenStable();
+    expect(await errorsOf(loader, 'Frequency')).toEqual(['Must be >= 1000']);
+    expect(await errorsOf(loader, 'Device under test')).toEqual(['Is not one of your devices']);
+    // The product's own wording.
+    expect(alerts(el)).toEqual(['Correct the 2 fields marked below and try again.']);
+    http.expectNone('/api/runs');
   });
 });

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import { switchMap } from 'rxjs';
+import { forkJoin, switchMap } from 'rxjs';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
@@ -15,6 +15,7 @@ import { problemMessage } from '../session/problem-message';
 import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { TEST_KINDS, TEST_KIND_LABELS, type TestKind } from '../../../shared/rules/test-kind';
 
+/** Build a test plan for a device (/plans/new?deviceId=…) from its rule set and test points, then start a run from it. */
 @Component({
   selector: 'sc-plan-form-page',
   imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatIconModule, MatProgressBarModule],
@@ -33,6 +34,11 @@ export class PlanFormPage {
   protected readonly kindLabels = TEST_KIND_LABELS;
   protected readonly deviceList = signal<DeviceRow[]>([]);
   protected readonly ruleSets = signal<RuleSetRow[]>([]);
+  /** The devices and rule sets the selects offer are being fetched. */
+  protected readonly loading = signal(true);
+  /** Saving is offered only once both lists were read. */
+  protected readonly loaded = signal(false);
+  protected readonly loadError = signal<string | null>(null);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly form = this.fb.group({
@@ -43,13 +49,26 @@ export class PlanFormPage {
   });
 
   constructor() {
-    this.devices.list({ pageSize: 200 }).subscribe({ next: (p) => this.deviceList.set(p.items), error: (e) => this.error.set(problemMessage(e)) });
-    this.plans.ruleSets().subscribe({
-      next: (r) => {
-        this.ruleSets.set(r.items);
-        if (!this.form.controls.ruleSetId.value && r.items[0]) this.form.controls.ruleSetId.setValue(r.items.find((x) => x.body.service === 'maritime')?.id ?? r.items[0].id);
+    this.load();
+  }
+
+  /** Fetches the lab's devices and the rule sets (latest versions) together; again after a failure. */
+  load(): void {
+    this.loading.set(true);
+    this.loadError.set(null);
+    forkJoin({ devices: this.devices.list({ pageSize: 200 }), ruleSets: this.plans.ruleSets() }).subscribe({
+      next: ({ devices, ruleSets }) => {
+        this.deviceList.set(devices.items);
+        this.ruleSets.set(ruleSets.items);
+        const items = ruleSets.items;
+        if (!this.form.controls.ruleSetId.value && items[0]) this.form.controls.ruleSetId.setValue(items.find((x) => x.body.service === 'maritime')?.id ?? items[0].id);
+        this.loading.set(false);
+        this.loaded.set(true);
       },
-      error: (e) => this.error.set(problemMessage(e)),
+      error: (e) => {
+        this.loadError.set(problemMessage(e));
+        this.loading.set(false);
+      },
     });
   }
 
@@ -75,6 +94,7 @@ export class PlanFormPage {
   }
 
   saveAndStart(): void {
+    if (!this.loaded()) return;
     clearServerErrors(this.form);
     if (this.form.invalid || this.form.controls.testPoints.length === 0) {
       this.form.markAllAsTouched();
