@@ -5,6 +5,7 @@ import { Router, provideRouter } from '@angular/router';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { MatSelectHarness } from '@angular/material/select/testing';
 import { InstrumentFormPage } from './instrument-form-page';
+import { todayUtc } from './calibration-dates';
 import type { Instrument } from './equipment-api';
 import { alerts, buttonNamed, errorsOf, inputLabelled, problem, settle, submit, textOf } from '../testing/page-testing';
 
@@ -92,14 +93,15 @@ describe('InstrumentFormPage', () => {
     await fixture.whenStable();
     // The product's own wording.
     expect(await errorsOf(loader, 'Instrument name')).toEqual(['Enter a name.']);
-    expect(await errorsOf(loader, 'Calibrated on')).toEqual(['Enter the calibration date (not after today).']);
+    expect(await errorsOf(loader, 'Calibrated on')).toEqual(['Enter the calibration date.']);
     expect(await errorsOf(loader, 'Calibration due')).toEqual(['Enter the due date.']);
     expect(await errorsOf(loader, 'Certificate')).toEqual(['Enter the certificate reference.']);
     expect(await errorsOf(loader, 'Contribution')).toEqual(['Name it.']);
     http.expectNone('/api/instruments');
   });
 
-  it('refuses a due date on or before the calibration date', async () => {
+  it('refuses a due date on or before the calibration date under the due date, as the server does', async () => {
+    // server/instruments/instrument-checks.ts: calibrationDue must be after calibratedOn (the same day is refused).
     const { fixture, el, loader } = await render();
     await fillIdentity(loader);
     await (await inputLabelled(loader, 'Calibration due')).setValue('2026-01-10');
@@ -107,10 +109,39 @@ describe('InstrumentFormPage', () => {
     await fixture.whenStable();
     // The product's own wording.
     expect(el.textContent).toContain('No contributions: this instrument adds nothing to the budgets.');
+    expect(await errorsOf(loader, 'Calibration due')).toEqual(['The calibration must fall due after the day it was done (2026-01-10).']);
     submit(el);
     await fixture.whenStable();
-    expect(alerts(el)).toEqual(['The calibration falls due after the day it was done: check the two dates.']);
+    expect(alerts(el)).toEqual([]);
     http.expectNone('/api/instruments');
+    // Moving the calibration date back clears it: the due date is judged again.
+    await (await inputLabelled(loader, 'Calibrated on')).setValue('2026-01-09');
+    expect(await errorsOf(loader, 'Calibration due')).toEqual([]);
+    submit(el);
+    const req = http.expectOne({ method: 'POST', url: '/api/instruments' });
+    expect(req.request.body).toMatchObject({ calibratedOn: '2026-01-09', calibrationDue: '2026-01-10' });
+  });
+
+  it('refuses a calibration dated after today (UTC, as the server judges it) under its field, and takes today itself', async () => {
+    const { fixture, el, loader } = await render();
+    await fillIdentity(loader);
+    await (await inputLabelled(loader, 'Contribution')).setValue('Sensor linearity');
+    const today = todayUtc();
+    // The next calendar day in UTC.
+    const tomorrow = new Date(Date.parse(`${today}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
+    await (await inputLabelled(loader, 'Calibrated on')).setValue(tomorrow);
+    await (await inputLabelled(loader, 'Calibration due')).setValue('2999-01-01');
+    submit(el);
+    await fixture.whenStable();
+    // The product's own wording.
+    expect(await errorsOf(loader, 'Calibrated on')).toEqual([`The calibration cannot be after today (${today}, UTC).`]);
+    expect(await errorsOf(loader, 'Calibration due')).toEqual([]);
+    http.expectNone('/api/instruments');
+    await (await inputLabelled(loader, 'Calibrated on')).setValue(today);
+    expect(await errorsOf(loader, 'Calibrated on')).toEqual([]);
+    expect(el.querySelector('input[formcontrolname="calibratedOn"]')!.getAttribute('max')).toBe(today);
+    submit(el);
+    expect(http.expectOne({ method: 'POST', url: '/api/instruments' }).request.body.calibratedOn).toBe(today);
   });
 
   it('loads an instrument with its contributions and saves the change with PUT', async () => {
@@ -143,7 +174,7 @@ describe('InstrumentFormPage', () => {
     await fillIdentity(loader);
     await (await inputLabelled(loader, 'Contribution')).setValue('Sensor linearity');
     submit(el);
-    // The server judges "today" by its own clock (server/instruments/instrument-checks.ts), which can be a day ahead of the browser's.
+    // The server judges "today" by its own clock (server/instruments/instrument-checks.ts), which need not agree with the browser's.
     http.expectOne('/api/instruments').flush(...problem(422, 'The instrument has 1 problem: /calibratedOn must not be after today (2026-01-09).', [{ pointer: '/calibratedOn', message: 'must not be after today (2026-01-09)' }]));
     await fixture.whenStable();
     // The server's words under the field the browser thought valid; the banner points at it (the product's own wording).

@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, OnInit, computed, inject, input, si
 import { DecimalPipe } from '@angular/common';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { Router, RouterLink } from '@angular/router';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -12,6 +12,7 @@ import { MatSelectModule } from '@angular/material/select';
 import { problemMessage } from '../session/problem-message';
 import { clearServerErrors, showProblemOnForm } from '../session/show-problem-on-form';
 import { CalibrationChip } from './calibration-chip';
+import { calibratedNotAfterToday, dueAfterCalibration, todayUtc } from './calibration-dates';
 import { BUDGETS, BUDGET_WORDS, DISTRIBUTION_WORDS, contributionBody, contributionGroup, contributionStandard } from './contribution-form';
 import { EquipmentApi, type Instrument } from './equipment-api';
 import type { UncertaintyDistribution } from '../../../shared/uncertainty/uncertainty-contribution';
@@ -40,13 +41,14 @@ export class InstrumentFormPage implements OnInit {
   protected readonly loading = signal(false);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
-  protected readonly today = new Date().toISOString().slice(0, 10);
+  /** The UTC date, as the server judges "not after today" (server/instruments/instrument-checks.ts). */
+  protected readonly today = todayUtc();
   protected readonly form = this.fb.nonNullable.group({
     name: ['', [Validators.required, Validators.maxLength(200)]],
     model: ['', [Validators.required, Validators.maxLength(200)]],
     serialNumber: ['', [Validators.required, Validators.maxLength(100)]],
-    calibratedOn: ['', Validators.required],
-    calibrationDue: ['', Validators.required],
+    calibratedOn: ['', [Validators.required, calibratedNotAfterToday()]],
+    calibrationDue: ['', [Validators.required, dueAfterCalibration()]],
     certificateRef: ['', [Validators.required, Validators.maxLength(200)]],
     contributions: this.fb.array([contributionGroup(this.fb)]),
   });
@@ -56,6 +58,25 @@ export class InstrumentFormPage implements OnInit {
     this.values();
     return this.form.controls.contributions.controls.map((g) => contributionStandard(g.getRawValue()));
   });
+
+  constructor() {
+    // The due date is judged against the calibration date: judge it again when that changes.
+    this.form.controls.calibratedOn.valueChanges.pipe(takeUntilDestroyed()).subscribe(() => this.form.controls.calibrationDue.updateValueAndValidity());
+  }
+
+  /** The message under the calibration date: the server's, else the first rule it breaks. */
+  protected calibratedOnMessage(): string {
+    const control = this.form.controls.calibratedOn;
+    const afterToday = control.getError('afterToday') as { today: string } | null;
+    return control.getError('server') ?? (afterToday ? `The calibration cannot be after today (${afterToday.today}, UTC).` : 'Enter the calibration date.');
+  }
+
+  /** The message under the due date: the server's, else the first rule it breaks. */
+  protected calibrationDueMessage(): string {
+    const control = this.form.controls.calibrationDue;
+    const early = control.getError('dueNotAfterCalibration') as { calibratedOn: string } | null;
+    return control.getError('server') ?? (early ? `The calibration must fall due after the day it was done (${early.calibratedOn}).` : 'Enter the due date.');
+  }
 
   ngOnInit(): void {
     const id = this.id();
@@ -90,10 +111,6 @@ export class InstrumentFormPage implements OnInit {
     const v = this.form.getRawValue();
     if (this.form.invalid) {
       this.form.markAllAsTouched();
-      return;
-    }
-    if (v.calibrationDue <= v.calibratedOn) {
-      this.error.set('The calibration falls due after the day it was done: check the two dates.');
       return;
     }
     const body = {
