@@ -22,15 +22,18 @@ export async function assignedInstruments(run: { id: string; organizationId: str
   return Instrument.findAll({ where: { id: { [Op.in]: links.map((l) => l.instrumentId) } }, order: [['name', 'ASC'], ['id', 'ASC']] });
 }
 
+/** What the rules read of an instrument on a run (a model instance or a row read as JSON). */
+export type RunInstrumentFacts = Pick<Instrument, 'id' | 'name' | 'serialNumber' | 'calibrationDue' | 'certificateRef' | 'contributions'>;
+
 /** "<name> s/n <serial> was due for calibration on <date>" for each instrument past its due date. */
-export function overdueMessages(instruments: Instrument[], today: string): string[] {
+export function overdueMessages(instruments: RunInstrumentFacts[], today: string): string[] {
   return instruments
     .filter((i) => calibrationStatus(i.calibrationDue, today) === 'overdue')
     .map((i) => `${i.name} s/n ${i.serialNumber} was due for calibration on ${i.calibrationDue}`);
 }
 
 /** Throw a 409 naming every instrument past its calibration due date; `doing` says what was refused. */
-export function refuseOverdue(instruments: Instrument[], today: string, doing: string): void {
+export function refuseOverdue(instruments: RunInstrumentFacts[], today: string, doing: string): void {
   const messages = overdueMessages(instruments, today);
   if (messages.length) throw conflict(`${messages.join('; ')}. ${doing}`, { code: 'calibration-overdue' });
 }
@@ -39,7 +42,7 @@ export function refuseOverdue(instruments: Instrument[], today: string, doing: s
  * Each instrument's contributions grouped by the budget they join; names carry the instrument so
  * the stored budget shows where every row came from.
  */
-export function contributionsByBudget(instruments: Instrument[]): Partial<Record<InstrumentBudget, UncertaintyContribution[]>> {
+export function contributionsByBudget(instruments: RunInstrumentFacts[]): Partial<Record<InstrumentBudget, UncertaintyContribution[]>> {
   const out: Partial<Record<InstrumentBudget, UncertaintyContribution[]>> = {};
   for (const i of instruments) {
     for (const { budget, ...c } of i.contributions as InstrumentContribution[]) {

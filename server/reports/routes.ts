@@ -40,7 +40,7 @@ export function reportRoutes(deps: ReportDeps): RouteDef[] {
       bodySchema: reasonSchema,
       async handler(ctx) {
         ctx.status(200);
-        return runDetail(await transition(ctx, await loadRun(ctx.params.id), 'revise', ctx.body.reason));
+        return runDetail(ctx.transaction!, (await transition(ctx, await loadRun(ctx.params.id), 'revise', ctx.body.reason)).id);
       },
     }),
     route({

@@ -26,7 +26,7 @@ export function runRoutes(sequelize: Sequelize, mail: Omit<RunMailDeps, 'sequeli
         const run = await transition(ctx, await loadRun(ctx.params.id), action, ctx.body?.reason);
         if (action === 'submit') await mailReviewRequested(mailDeps, ctx, run);
         if (action === 'return') await mailReturnedForRework(mailDeps, ctx, run, ctx.body!.reason!);
-        return runDetail(run);
+        return runDetail(ctx.transaction!, run.id);
       },
     });
 
@@ -49,7 +49,7 @@ export function runRoutes(sequelize: Sequelize, mail: Omit<RunMailDeps, 'sequeli
       bodySchema: createRunSchema,
       async handler(ctx) {
         const run = await createRun(sequelize, ctx, (ctx.body as { planId: string }).planId);
-        return runDetail(run);
+        return runDetail(ctx.transaction!, run.id);
       },
     }),
     route({
@@ -58,7 +58,7 @@ export function runRoutes(sequelize: Sequelize, mail: Omit<RunMailDeps, 'sequeli
       summary: 'A run with its test cases, latest readings and results',
       access: { kind: 'member', roles: LAB },
       async handler(ctx) {
-        return runDetail(await loadRun(ctx.params.id));
+        return runDetail(ctx.transaction!, ctx.params.id);
       },
     }),
     route<SaveReadingBody>({
@@ -68,7 +68,7 @@ export function runRoutes(sequelize: Sequelize, mail: Omit<RunMailDeps, 'sequeli
       access: { kind: 'member-or-api-key', roles: ['lab-admin', 'engineer'] },
       bodySchema: saveReadingSchema,
       async handler(ctx) {
-        return saveReading(ctx, await loadRun(ctx.params.id), ctx.params.caseId, ctx.body.values);
+        return saveReading(ctx, ctx.params.id, ctx.params.caseId, ctx.body.values);
       },
     }),
     route<RunInstrumentsBody>({
@@ -80,7 +80,7 @@ export function runRoutes(sequelize: Sequelize, mail: Omit<RunMailDeps, 'sequeli
       async handler(ctx) {
         const run = await loadRun(ctx.params.id);
         await setRunInstruments(ctx, run, ctx.body.instrumentIds);
-        return runDetail(run);
+        return runDetail(ctx.transaction!, run.id);
       },
     }),
     act('submit', ['lab-admin', 'engineer'], 'Send the run for technical review'),

@@ -58,6 +58,25 @@ describe('readings and results', () => {
     await expect(inTenant(t.sequelize, s.lab.id, () => t.sequelize.query('UPDATE readings SET values = \'{}\' WHERE run_id = :id', { replacements: { id: run.id } }))).rejects.toThrow(/immutable/);
   });
 
+  it('shows the latest reading of each case and only its own result, however many readings came before', async () => {
+    const { engineer, run } = await setup();
+    const path = `/runs/${run.id}/cases/${run.testCases[0].id}/reading`;
+    let last = await engineer('put', path, { values: { pepDbm: 50, carrierDbm: 20 } });
+    for (let carrier = 19; carrier >= 5; carrier--) last = await engineer('put', path, { values: { pepDbm: 50, carrierDbm: carrier } });
+    // 47 CFR 80.207(c): 40 dB below PEP. PEP 50 dBm, carrier 5 dBm -> 45 dB, a pass (arithmetic).
+    const detail = (await engineer('get', `/runs/${run.id}`)).body;
+    const shown = detail.testCases[0];
+    expect(shown.reading).toEqual({ ...last.body.reading, enteredBy: expect.any(String) });
+    expect(shown.result).toEqual(last.body.result);
+    expect(shown.result).toMatchObject({ value: 45, verdict: 'pass', readingId: last.body.reading.id });
+    expect(detail.testCases.slice(1).every((c: { reading: unknown; result: unknown }) => c.reading === null && c.result === null)).toBe(true);
+    // A newer reading that does not evaluate hides the older result instead of showing it beside the wrong values.
+    const incomplete = await engineer('put', path, { values: { pepDbm: 50, carrierDbm: null } });
+    const after = (await engineer('get', `/runs/${run.id}`)).body.testCases[0];
+    expect(after.reading.id).toBe(incomplete.body.reading.id);
+    expect(after.result).toBeNull();
+  });
+
   it.each([
     [{ values: { pepDbm: 'fifty' } }, 422],
     [{ values: { pepDbm: 1e300 } }, 422],
