@@ -2,7 +2,10 @@
  * Hot paths (the run list, the run workspace, saving a reading, the tenant check of every request)
  * send their SQL straight to the transaction's node-postgres connection as named prepared
  * statements: PostgreSQL parses and plans each text once per connection instead of on every
- * request, and no model instances are built for rows that are only read. Everything else goes
+ * request, and no model instances are built for rows that are only read. The tenant transaction
+ * makes PostgreSQL use each statement's generic plan from the first execution, so write them to
+ * plan well without their parameter values: values that decide the plan (a LIMIT) go into the text
+ * after validation, and there must be few such texts. Everything else goes
  * through Sequelize models. Errors are wrapped as Sequelize's DatabaseError, so the error handler
  * answers them exactly like the rest (503 when the database is restarting, 404 for a malformed id).
  */

@@ -57,7 +57,10 @@ export async function listRuns(transaction: Transaction, organizationId: string,
     q.filter.engineerId || q.filter.search
       ? `SELECT count(*) AS n FROM test_runs r WHERE ${where.join(' AND ')}`
       : `SELECT coalesce(sum(n), 0) AS n FROM run_state_counts WHERE organization_id = $1${states.length ? ' AND state = ANY($2::text[])' : ''}`;
-  const limit = param(q.pageSize);
+  // The page size is written into the text (a whole number from 1 to 200, checked by readListQuery):
+  // PostgreSQL's generic plan for a LIMIT it cannot see is a worse plan (server/tenancy/tenant-transaction.ts).
+  const limit = String(q.pageSize);
+  if (!/^\d{1,3}$/.test(limit)) throw badRequest('pageSize must be a whole number from 1 to 200.');
   const offset = param((q.page - 1) * q.pageSize);
   // The total is an uncorrelated subquery: PostgreSQL evaluates it once per statement (an InitPlan).
   const rows = await preparedRows<RunListItem & { total: string }>(
@@ -74,6 +77,6 @@ export async function listRuns(transaction: Transaction, organizationId: string,
   if (rows.length) return page(rows.map(({ total: _total, ...item }) => item), Number(rows[0].total), q);
   // An empty page: no match at all on page 1, or a page past the end (its total still counts).
   if (q.page === 1) return page([], 0, q);
-  const [counted] = await preparedRows<{ n: string }>(transaction, total, values.slice(0, values.length - 2));
+  const [counted] = await preparedRows<{ n: string }>(transaction, total, values.slice(0, values.length - 1));
   return page([], Number(counted.n), q);
 }

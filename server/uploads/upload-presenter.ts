@@ -1,7 +1,11 @@
 import type { Result, Upload } from '../db/models';
 
+/** What an upload's presentation reads: a model instance, or the row just written (record-upload.ts). */
+export type UploadFacts = Pick<Upload, 'id' | 'runId' | 'testCaseId' | 'format' | 'fileName' | 'fileSizeBytes' | 'fileSha256' | 'dataKey' | 'dataFileName' | 'dataSizeBytes' | 'dataSha256' | 'parameters' | 'engineVersion' | 'uploadedBy' | 'apiKeyId' | 'createdAt'>;
+export type UploadResultFacts = Pick<Result, 'id' | 'uploadId' | 'engineVersion' | 'value' | 'unit' | 'limitValue' | 'margin' | 'expandedUncertainty' | 'coverageFactor' | 'verdict' | 'detail' | 'createdAt'>;
+
 /** An upload as listed: what was received and how, without the analysis (which can be large). */
-export function presentUpload(u: Upload) {
+export function presentUpload(u: UploadFacts) {
   return {
     id: u.id,
     runId: u.runId,
@@ -18,7 +22,7 @@ export function presentUpload(u: Upload) {
 }
 
 /** A result computed from an upload: the reading-result fields with the upload it came from. */
-export function presentUploadResult(r: Result) {
+export function presentUploadResult(r: UploadResultFacts) {
   return {
     id: r.id,
     uploadId: r.uploadId,
@@ -36,6 +40,6 @@ export function presentUploadResult(r: Result) {
 }
 
 /** One upload in full: metadata, the analysis (figures and the thinned trace or PSD) and its result. */
-export function presentUploadDetail(u: Upload, result: Result | null) {
+export function presentUploadDetail(u: UploadFacts & Pick<Upload, 'analysis'>, result: UploadResultFacts | null) {
   return { ...presentUpload(u), analysis: u.analysis, result: result && presentUploadResult(result) };
 }

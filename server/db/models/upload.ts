@@ -49,7 +49,7 @@ export class Upload extends Model<InferAttributes<Upload>, InferCreationAttribut
         dataSizeBytes: bigint('dataSizeBytes'),
         dataSha256: { type: DataTypes.TEXT },
         parameters: { type: DataTypes.JSONB, allowNull: false },
-        analysis: { type: DataTypes.JSONB, allowNull: false },
+        analysis: { type: DataTypes.JSON, allowNull: false },
         engineVersion: { type: DataTypes.TEXT, allowNull: false },
         uploadedBy: { type: DataTypes.UUID },
         apiKeyId: { type: DataTypes.UUID },
