@@ -1,5 +1,5 @@
 /**
- * The lab's run list: one prepared statement per shape of query that takes a page of test_runs
+ * The lab's run list: one statement that takes a page of test_runs
  * by an index led by the organization, joins only that page to its plan and device, and carries
  * the total. Sort and search keys live on the run (migration 0010), so no sort or filter needs
  * the join; a total for no filter or states alone comes from the per-state counts.
@@ -48,7 +48,9 @@ export async function listRuns(transaction: Transaction, organizationId: string,
   // The organization is named explicitly so the (organization_id, ...) indexes serve the query;
   // row-level security still guards every row.
   const where = ['r.organization_id = $1'];
-  if (states.length) where.push(`r.state = ANY(${param(states)}::text[])`);
+  // One state is an equality, so an (organization_id, state, ...) index also gives the order.
+  const stateIs = !states.length ? '' : states.length === 1 ? `state = ${param(states[0])}::text` : `state = ANY(${param(states)}::text[])`;
+  if (stateIs) where.push(`r.${stateIs}`);
   if (q.filter.engineerId) where.push(`r.engineer_id = ${param(q.filter.engineerId)}::uuid`);
   if (q.filter.search) where.push(`r.search_text LIKE lower(${param(likePattern(q.filter.search))})`);
   const column = RUN_SORT_COLUMNS[q.sort];
@@ -56,27 +58,34 @@ export async function listRuns(transaction: Transaction, organizationId: string,
   const total =
     q.filter.engineerId || q.filter.search
       ? `SELECT count(*) AS n FROM test_runs r WHERE ${where.join(' AND ')}`
-      : `SELECT coalesce(sum(n), 0) AS n FROM run_state_counts WHERE organization_id = $1${states.length ? ' AND state = ANY($2::text[])' : ''}`;
-  // The page size is written into the text (a whole number from 1 to 200, checked by readListQuery):
-  // PostgreSQL's generic plan for a LIMIT it cannot see is a worse plan (server/tenancy/tenant-transaction.ts).
-  const limit = String(q.pageSize);
-  if (!/^\d{1,3}$/.test(limit)) throw badRequest('pageSize must be a whole number from 1 to 200.');
+      : `SELECT coalesce(sum(n), 0) AS n FROM run_state_counts WHERE organization_id = $1${stateIs ? ` AND ${stateIs}` : ''}`;
+  const limit = param(q.pageSize);
   const offset = param((q.page - 1) * q.pageSize);
-  // The total is an uncorrelated subquery: PostgreSQL evaluates it once per statement (an InitPlan).
-  const rows = await preparedRows<RunListItem & { total: string }>(
-    transaction,
-    `SELECT (${total}) AS total, r.id, r.number, r.state, r.updated_at AS "updatedAt", r.created_at AS "createdAt", r.engineer_id AS "engineerId",
-            p.name AS "planName", d.manufacturer, d.model, d.serial_number AS "serialNumber", r.client_name AS client
-       FROM (SELECT r.id, r.plan_id, r.number, r.state, r.updated_at, r.created_at, r.engineer_id, r.client_name, r.device_model
-               FROM test_runs r WHERE ${where.join(' AND ')} ORDER BY ${order} LIMIT ${limit} OFFSET ${offset}) r
-       JOIN test_plans p ON p.organization_id = $1 AND p.id = r.plan_id
-       JOIN devices d ON d.organization_id = $1 AND d.id = p.device_id
-      ORDER BY ${order}`,
-    values,
-  );
+  const columns = `r.id, r.number, r.state, r.updated_at AS "updatedAt", r.created_at AS "createdAt", r.engineer_id AS "engineerId",
+            p.name AS "planName", d.manufacturer, d.model, d.serial_number AS "serialNumber", r.client_name AS client`;
+  const joins = `JOIN test_plans p ON p.organization_id = $1 AND p.id = r.plan_id
+       JOIN devices d ON d.organization_id = $1 AND d.id = p.device_id`;
+  // A search cannot use an index (see migration 0010): the matching runs are read once, with the
+  // sort key (newest first: from the index alone), then counted and paged; only the page's runs
+  // are read from the table. Otherwise the total is an uncorrelated subquery, evaluated once.
+  const sql = q.filter.search
+    ? `WITH matched AS MATERIALIZED (SELECT r.id, r.${column} AS k FROM test_runs r WHERE ${where.join(' AND ')})
+       SELECT (SELECT count(*) FROM matched) AS total, ${columns}
+         FROM (SELECT m.id FROM matched m ORDER BY m.k ${q.direction}, m.id ${q.direction} LIMIT ${limit} OFFSET ${offset}) pg
+         JOIN test_runs r ON r.organization_id = $1 AND r.id = pg.id
+         ${joins}
+        ORDER BY ${order}`
+    : `SELECT (${total}) AS total, ${columns}
+         FROM (SELECT r.id, r.plan_id, r.number, r.state, r.updated_at, r.created_at, r.engineer_id, r.client_name, r.device_model
+                 FROM test_runs r WHERE ${where.join(' AND ')} ORDER BY ${order} LIMIT ${limit} OFFSET ${offset}) r
+         ${joins}
+        ORDER BY ${order}`;
+  // Planned for its values each time (server/db/prepared-query.ts): the best plan for a rare
+  // state or a search differs from the one for the whole list.
+  const rows = await preparedRows<RunListItem & { total: string }>(transaction, sql, values, { unnamed: true });
   if (rows.length) return page(rows.map(({ total: _total, ...item }) => item), Number(rows[0].total), q);
   // An empty page: no match at all on page 1, or a page past the end (its total still counts).
   if (q.page === 1) return page([], 0, q);
-  const [counted] = await preparedRows<{ n: string }>(transaction, total, values.slice(0, values.length - 1));
+  const [counted] = await preparedRows<{ n: string }>(transaction, total, values.slice(0, values.length - 2), { unnamed: true });
   return page([], Number(counted.n), q);
 }

@@ -21,14 +21,8 @@ export async function inTenant<T>(
   });
 }
 
-/**
- * The tenant setting and (memberships have no row-level security) the caller's current roles, in
- * one round trip. Prepared statements in the transaction use their generic plan from the first
- * execution: PostgreSQL would otherwise keep planning the run list anew for each request (a
- * custom plan per LIMIT/OFFSET, about 0.4 ms, more than running it), and our prepared statements
- * are written so their generic plans are good (server/db/prepared-query.ts).
- */
-const TENANT_SETUP = `SELECT set_config('app.org_id', $1, true) AS org, set_config('plan_cache_mode', 'force_generic_plan', true) AS plans,
+/** The tenant setting and (memberships have no row-level security) the caller's current roles, in one round trip. */
+const TENANT_SETUP = `SELECT set_config('app.org_id', $1, true) AS org,
   CASE WHEN $2::uuid IS NULL THEN NULL ELSE ARRAY(SELECT role FROM memberships WHERE user_id = $2::uuid AND organization_id = nullif($1, '')::uuid) END AS roles`;
 
 /**
