@@ -4,7 +4,11 @@ import { requestScope } from './request-scope';
 let clsInstalled = false;
 
 /** One Sequelize instance per process, joined to the request scope so queries find their transaction. */
-export function createSequelize(databaseUrl: string, options: { poolMax?: number; logging?: boolean } = {}): Sequelize {
+/**
+ * `statementTimeoutMs` bounds every statement (30 s by default, so a runaway query cannot hold a
+ * connection); migrations pass 0, no limit, since rewriting a large table may take longer.
+ */
+export function createSequelize(databaseUrl: string, options: { poolMax?: number; logging?: boolean; statementTimeoutMs?: number } = {}): Sequelize {
   if (!clsInstalled) {
     Sequelize.useCLS(requestScope as never);
     clsInstalled = true;
@@ -14,7 +18,7 @@ export function createSequelize(databaseUrl: string, options: { poolMax?: number
     logging: options.logging ? (sql) => console.log(sql) : false,
     pool: { max: options.poolMax ?? 20, min: 0, idle: 10_000, acquire: 10_000 },
     define: { underscored: true, timestamps: true },
-    dialectOptions: { application_name: 'sidecheck', statement_timeout: 30_000 },
+    dialectOptions: { application_name: 'sidecheck', statement_timeout: options.statementTimeoutMs ?? 30_000 },
     retry: { max: 0 },
   });
 }

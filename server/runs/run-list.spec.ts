@@ -80,6 +80,24 @@ describe('GET /api/runs', () => {
     expect(wildcard.body.total).toBe(0); // % is a character to find, not a wildcard
   });
 
+  it('matches the beginning of words, every word of the search, words split at spaces and hyphens', async () => {
+    const { get, otherClient } = await lab();
+    // "SN-LIST-1" is found by its hyphen-separated parts too.
+    expect((await get('?search=list')).body.total).toBe(3);
+    expect((await get('?search=SN-LIST-1')).body.total).toBe(3);
+    // Every word must match: the client is "Aardvark Marine Radio".
+    const both = await get(`?search=${encodeURIComponent('marine aardv')}`);
+    expect(both.body.total).toBe(3);
+    expect(both.body.items.every((r: Row) => r.client === otherClient)).toBe(true);
+    expect((await get(`?search=${encodeURIComponent('aardvark nothing-like-this')}`)).body.total).toBe(0);
+    // A piece from the middle of a word is not a word's beginning.
+    expect((await get('?search=ardvark')).body.total).toBe(0);
+    expect((await get(`?search=${encodeURIComponent('a b c d e f g h i')}`)).status).toBe(400);
+    // A page past the end of a search still carries its total.
+    expect((await get('?search=list&page=5&pageSize=2')).body).toMatchObject({ items: [], total: 3 });
+    expect((await get('?search=list&state=in-review&page=5&pageSize=2')).body).toMatchObject({ items: [], total: 1 });
+  });
+
   it('sorts by client and by model, ties broken by id in the same direction', async () => {
     const { get, ids } = await lab();
     const byClient = await get('?sort=client&pageSize=3');
@@ -128,5 +146,26 @@ describe('GET /api/runs', () => {
     expect(past.body).toMatchObject({ items: [], total: 6, page: 9 });
     // The engineer filter counts the matching runs themselves.
     expect((await get(`?engineerId=${scenario.engineer.id}&state=testing`)).body.total).toBe(4);
+  });
+
+  it('pages a search with hundreds of matches in the order of the list, with the total', async () => {
+    const { s: scenario, get } = await lab();
+    // 320 more runs (more than the 300 above which the list checks runs against the matches instead of reading them by id).
+    await asSystem(t.sequelize, (transaction) =>
+      t.sequelize.query(
+        `INSERT INTO test_runs (organization_id, plan_id, number, state, engineer_id, created_at, updated_at)
+         SELECT :org, :plan, 'BULK-' || lpad(g::text, 5, '0'), 'testing', :engineer, '2026-10-01'::timestamptz, '2026-10-01'::timestamptz + g * interval '1 minute'
+           FROM generate_series(1, 320) g`,
+        { replacements: { org: scenario.lab.id, plan: scenario.plan.id, engineer: scenario.engineer.id }, transaction },
+      ),
+    );
+    const newest = await get('?search=bulk&pageSize=10');
+    expect(newest.body.total).toBe(320);
+    expect(newest.body.items.map((r: Row) => r.number)).toEqual(Array.from({ length: 10 }, (_, k) => `BULK-${String(320 - k).padStart(5, '0')}`));
+    const third = await get('?search=bulk&sort=number&page=3&pageSize=100');
+    expect(third.body.items.map((r: Row) => r.number)).toEqual(Array.from({ length: 100 }, (_, k) => `BULK-${String(201 + k).padStart(5, '0')}`));
+    expect((await get('?search=bulk-0031')).body.total).toBe(10); // BULK-00310 ... BULK-00319
+    expect((await get('?search=bulk&state=testing')).body.total).toBe(320);
+    expect((await get('')).body.total).toBe(326);
   });
 });
