@@ -31,6 +31,9 @@ function nodes(plan: PlanNode): PlanNode[] {
 /** Bulk rows straight in SQL (system scope): states spread as a busy lab's would be, one in 50 in review. */
 async function fill(s: Awaited<ReturnType<typeof buildLabScenario>>) {
   await asSystem(t.sequelize, async (transaction) => {
+    // 100,000 runs with their list keys and search terms (triggers, migration 0010) take longer
+    // than the API's 30 s statement limit on a busy machine; this fixture is not an API request.
+    await t.sequelize.query("SET LOCAL statement_timeout = '180s'", { transaction });
     await t.sequelize.query(
       `INSERT INTO test_runs (organization_id, plan_id, number, state, engineer_id, updated_at, created_at)
        SELECT :org, :plan, 'BULK-' || g,
