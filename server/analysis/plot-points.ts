@@ -18,7 +18,9 @@ export interface PlotSeries {
  */
 export function thinForPlot(x: ArrayLike<number>, y: ArrayLike<number>): PlotSeries {
   const thinned = decimateMinMax(x, y, Math.floor(MAX_PLOT_POINTS / 3));
-  const clean = (v: number) => (Number.isFinite(v) ? Number(v.toFixed(3)) : null);
+  // Rounded by arithmetic rather than through toFixed's string (a fifth of an upload's CPU time):
+  // the result can differ from toFixed only in the last digit of a value exactly halfway.
+  const clean = (v: number) => (Number.isFinite(v) ? Math.round(v * 1000) / 1000 : null);
   return { x: thinned.x.map(clean), y: thinned.y.map(clean) };
 }
 

@@ -1,7 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { Organization, TestCase, TestRun, Upload, User } from '../db/models';
 import type { RouteContext } from '../http/route';
-import { assignedInstruments } from '../instruments/run-instruments';
 import { asSystem, inTenant } from '../tenancy/tenant-transaction';
 import { ingestUpload } from '../uploads/ingest-upload';
 import { receiveLocalFile } from '../uploads/local-upload';
@@ -29,10 +28,7 @@ export async function ensureDemoTraceUpload(sequelize: Sequelize, deps: UploadDe
   if (!found) return false;
   const { engineer } = found;
   const ctx = { organizationId: found.labId, principal: { userId: engineer.id, email: engineer.email, displayName: engineer.displayName, memberships: [] }, req: {}, transaction: null } as unknown as RouteContext;
-  const target = await inTenant(sequelize, found.labId, async () => {
-    const t = await loadUploadTarget(found.runId, found.caseId);
-    return { ...t, instruments: await assignedInstruments({ id: found.runId, organizationId: found.labId }) };
-  });
+  const target = await inTenant(sequelize, found.labId, (transaction) => loadUploadTarget(transaction, found.labId, found.runId, found.caseId));
   const trace = demoMaskTrace();
   const received = await receiveLocalFile(deps.incomingDir, { name: 'HX150 2182 kHz two-tone mask.csv', bytes: Buffer.from(trace.csv), contentType: 'text/csv' }, { referenceDbm: trace.referenceDbm.toFixed(2) });
   try {

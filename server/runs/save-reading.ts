@@ -1,7 +1,6 @@
 /**
  * Saving a reading, the request a bench makes most: two prepared statements in the request's
- * transaction. The first reads what the rules need (the run's state, the test case, the rule set
- * snapshot and the run's instruments with their calibration and contributions); the second writes
+ * transaction. The first reads what the rules need (run-case-target.ts); the second writes
  * the reading, the result computed by the shared engine, the run's last test date and the audit
  * entry, together. The entered values are kept unchanged even when they do not evaluate yet.
  */
@@ -12,20 +11,9 @@ import type { TestCase } from '../db/models';
 import { evaluateTestCase, EvaluationError } from '../../shared/evaluation/evaluate-test-case';
 import { ENGINE_VERSION } from '../../shared/engine-version';
 import { READING_FIELDS, type ReadingValues } from '../../shared/evaluation/reading-fields';
-import type { RuleSetBody } from '../../shared/rules/rule-set';
-import { contributionsByBudget, refuseOverdue, type RunInstrumentFacts } from '../instruments/run-instruments';
+import { contributionsByBudget, refuseOverdue } from '../instruments/run-instruments';
+import { loadRunCaseTarget } from './run-case-target';
 import { todayIso } from '../instruments/calibration-status';
-
-const SAVE_TARGET = `
-SELECT r.state, tc.id AS "caseId", tc.kind, p.rule_set_snapshot AS rules,
-       coalesce((SELECT json_agg(json_build_object('id', i.id, 'name', i.name, 'serialNumber', i.serial_number, 'calibrationDue', i.calibration_due,
-                                                   'certificateRef', i.certificate_ref, 'contributions', i.contributions) ORDER BY i.name, i.id)
-                   FROM run_instruments ri JOIN instruments i ON i.organization_id = ri.organization_id AND i.id = ri.instrument_id
-                  WHERE ri.organization_id = r.organization_id AND ri.run_id = r.id), '[]') AS instruments
-  FROM test_runs r
-  JOIN test_plans p ON p.organization_id = r.organization_id AND p.id = r.plan_id
-  LEFT JOIN test_cases tc ON tc.organization_id = r.organization_id AND tc.plan_id = r.plan_id AND tc.id = $2
- WHERE r.id = $1 AND r.organization_id = $3`;
 
 /** Data-modifying CTEs run once each, to completion, whether or not the final SELECT reads them. */
 const SAVE_WRITE = `
@@ -48,18 +36,10 @@ WITH reading AS (
 SELECT reading.id AS "readingId", reading.created_at AS "readingCreatedAt", result.id AS "resultId", result.created_at AS "resultCreatedAt"
   FROM reading LEFT JOIN result ON true`;
 
-interface Target {
-  state: string;
-  caseId: string | null;
-  kind: TestCase['kind'] | null;
-  rules: RuleSetBody;
-  instruments: RunInstrumentFacts[];
-}
-
 export async function saveReading(ctx: RouteContext, runId: string, caseId: string, values: ReadingValues) {
   const transaction = ctx.transaction!;
   const organizationId = ctx.organizationId!;
-  const [target] = await preparedRows<Target>(transaction, SAVE_TARGET, [runId, caseId, organizationId]);
+  const target = await loadRunCaseTarget(transaction, organizationId, runId, caseId);
   if (!target) throw notFound('The test run');
   if (target.state !== 'testing') throw conflict(`Readings can only be changed while the run is on the bench; it is ${target.state}.`, { code: 'run-not-editable' });
   if (!target.caseId || !target.kind) throw notFound('The test case');

@@ -1,6 +1,6 @@
 import type { RouteContext } from '../http/route';
 import { inTenant } from '../tenancy/tenant-transaction';
-import { assignedInstruments, refuseOverdue } from '../instruments/run-instruments';
+import { refuseOverdue } from '../instruments/run-instruments';
 import { todayIso } from '../instruments/calibration-status';
 import { ingestUpload } from './ingest-upload';
 import { receiveMultipart } from './receive-multipart';
@@ -17,10 +17,7 @@ import type { UploadDeps } from './upload-deps';
  * written (ingestUpload). The request waits for the analysis (see DEVELOPERS.md: uploads).
  */
 export async function createUpload(deps: UploadDeps, ctx: RouteContext): Promise<unknown> {
-  const target = await inTenant(deps.sequelize, ctx.organizationId, async () => {
-    const found = await loadUploadTarget(ctx.params.id, ctx.params.caseId);
-    return { ...found, instruments: await assignedInstruments(found.run) };
-  });
+  const target = await inTenant(deps.sequelize, ctx.organizationId, (transaction) => loadUploadTarget(transaction, ctx.organizationId!, ctx.params.id, ctx.params.caseId));
   refuseOverdue(target.instruments, todayIso(), 'Replace or recalibrate it before uploading measurements made with it.');
   const received = await receiveMultipart(ctx.req, ctx.res, { incomingDir: deps.incomingDir, maxFileBytes: deps.settings.maxFileBytes, allowData: true });
   try {

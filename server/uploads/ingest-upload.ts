@@ -1,13 +1,12 @@
 import crypto from 'node:crypto';
 import { uploadFieldsSchema, type UploadFields } from '../../shared/schemas/uploads';
-import type { Instrument, TestCase, TestPlan, TestRun } from '../db/models';
 import type { RouteContext } from '../http/route';
 import { contributionsByBudget } from '../instruments/run-instruments';
 import { evaluateUpload, uploadResultDetail } from '../analysis/evaluate-upload';
 import { prepareUpload } from './prepare-upload';
 import type { ReceivedUpload } from './receive-multipart';
 import { recordUpload } from './record-upload';
-import { caseDefaults } from './upload-target';
+import { caseDefaults, type UploadTarget } from './upload-target';
 import type { UploadDeps } from './upload-deps';
 import { presentUploadDetail } from './upload-presenter';
 
@@ -21,19 +20,18 @@ import { presentUploadDetail } from './upload-presenter';
 export async function ingestUpload(
   deps: UploadDeps,
   ctx: RouteContext,
-  target: { run: TestRun; testCase: TestCase; plan: TestPlan; instruments: Instrument[] },
+  target: UploadTarget,
   received: ReceivedUpload,
 ) {
-  const { run, testCase, plan, instruments } = target;
-  const prepared = await prepareUpload<UploadFields>(received, { schema: uploadFieldsSchema, maxTraceBytes: deps.settings.maxTraceBytes, defaults: caseDefaults(testCase) });
-  const rules = plan.ruleSetSnapshot;
-  const evaluation = evaluateUpload({ kind: testCase.kind, evidence: prepared.evidence, rules, contributions: contributionsByBudget(instruments) });
+  const { instruments, rules } = target;
+  const prepared = await prepareUpload<UploadFields>(received, { schema: uploadFieldsSchema, maxTraceBytes: deps.settings.maxTraceBytes, defaults: caseDefaults(target) });
+  const evaluation = evaluateUpload({ kind: target.kind, evidence: prepared.evidence, rules, contributions: contributionsByBudget(instruments) });
   const detail = uploadResultDetail(evaluation, {
     summary: prepared.summary,
     rules,
     instruments: instruments.map((i) => ({ id: i.id, name: i.name, serialNumber: i.serialNumber, calibrationDue: i.calibrationDue, certificateRef: i.certificateRef })),
   });
   const parameters = { ...prepared.fields, carrierHz: prepared.carrierHz, sideband: prepared.sideband };
-  const { upload, result } = await recordUpload(deps, ctx, { uploadId: crypto.randomUUID(), runId: run.id, testCaseId: testCase.id, prepared, parameters, evaluation, detail });
+  const { upload, result } = await recordUpload(deps, ctx, { uploadId: crypto.randomUUID(), runId: target.runId, testCaseId: target.caseId, prepared, parameters, evaluation, detail });
   return presentUploadDetail(upload, result);
 }

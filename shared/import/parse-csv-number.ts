@@ -12,6 +12,11 @@ const DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
  * @example parseCsvNumber('0x10', false)    // NaN
  */
 export function parseCsvNumber(field: string, decimalComma: boolean): number {
+  // The usual field, a plain decimal without spaces or quotes, skips the trimming below.
+  if (!decimalComma && DECIMAL.test(field)) {
+    const value = Number(field);
+    return Number.isFinite(value) ? value : NaN;
+  }
   let text = field.trim();
   if (text.length >= 2 && text[0] === '"' && text[text.length - 1] === '"') {
     text = text.slice(1, -1).trim();
