@@ -7,7 +7,7 @@
  *   npm run bench:load                 (60 s phases)
  *   npm run bench:load -- --quick      (10 s phases)
  *   node node_modules/tsx/dist/cli.mjs bench/load.ts [--quick] [--duration 60] [--rate 300]
- *        [--connections 16] [--reuse] [--keep-db] [--per-kind] [--kinds list,save]
+ *        [--connections 16] [--instances 60] [--reuse] [--keep-db] [--per-kind] [--kinds list,save]
  *
  * Works from a fresh clone after `npm run build` (or without it: when dist/server is missing the
  * server is compiled with tsc; the client is not needed, the API serves only /api here). Uses
@@ -24,9 +24,14 @@
  *     HTTP + PostgreSQL round trip, closed loop.
  *  2. capacity: the mix, closed loop (each connection sends the next request when the last is
  *     answered) with --connections per API process: the most this machine sustains.
- *  3. at the target rate: the same mix at --rate requests/s in total (ten autocannon instances,
- *     staggered by 100 ms so their per-second rate windows do not all open at once); then at half
- *     the capacity measured in 2, to show the latency of a machine that is not saturated.
+ *  3. at the target rate: the same mix at --rate requests/s in total, then at half the capacity
+ *     measured in 2 (the latency of a machine that is not saturated). autocannon limits a rate per
+ *     connection by sending that connection's whole quota for a second back to back when the
+ *     second begins, then waiting: ten instances of 8 connections (the first version of this
+ *     bench) made a burst of 30 requests every 100 ms, a queue that took a saturated machine
+ *     ~75 ms to drain. So the rate is spread over --instances instances (default 60) of two
+ *     connections, each a few requests a second, their seconds staggered evenly: arrivals close
+ *     to a steady 300 a second, as many independent people would make them.
  *  4. scale: sequential run-list requests in labs of 100, 1,000 and 10,000 runs.
  *  (--per-kind: before 2, each kind alone, closed loop, with the server CPU it costs per request.
  *   --kinds list,save: only those kinds alone, then stop; for profiling, LOAD_API_NODE_ARGS adds
@@ -82,7 +87,7 @@ interface AcInstance {
 const autocannon = require('autocannon') as (options: AcOptions, done: (error: Error | null, result: AcResult) => void) => AcInstance;
 
 // ---------------------------------------------------------------------------------------------
-interface Args { quick: boolean; durationS: number; rate: number; connections: number; reuse: boolean; keepDb: boolean; perKind: boolean; kinds: string[] | null }
+interface Args { quick: boolean; durationS: number; rate: number; connections: number; instances: number; reuse: boolean; keepDb: boolean; perKind: boolean; kinds: string[] | null }
 
 function readArgs(argv: string[]): Args {
   const value = (name: string) => {
@@ -95,6 +100,7 @@ function readArgs(argv: string[]): Args {
     durationS: value('--duration') ?? (quick ? 10 : 60),
     rate: value('--rate') ?? TARGETS.sustainedRps,
     connections: value('--connections') ?? 16,
+    instances: value('--instances') ?? 60,
     reuse: argv.includes('--reuse'),
     keepDb: argv.includes('--keep-db'),
     perKind: argv.includes('--per-kind') || argv.includes('--kinds'),
@@ -580,14 +586,15 @@ async function main(): Promise<void> {
     failed += listOnly.failed() + listOnly.socketErrors + listOnly.timeouts;
 
     // 3. The target rate.
-    const atRate = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 5, connections: 8, durationS: args.durationS, overallRate: args.rate, choose: weightedKind, build }));
-    printTally(`at the target rate: the mix at ${args.rate} req/s offered, 2 API processes, ${args.durationS} s`, atRate, MIX.map((m) => m.kind));
+    const perPort = Math.max(1, Math.round(args.instances / ports.api.length));
+    const atRate = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: 2, durationS: args.durationS, overallRate: args.rate, choose: weightedKind, build }));
+    printTally(`at the target rate: the mix at ${args.rate} req/s offered (${perPort * ports.api.length} autocannon instances x 2 connections), 2 API processes, ${args.durationS} s`, atRate, MIX.map((m) => m.kind));
     failed += atRate.failed() + atRate.socketErrors + atRate.timeouts;
 
     // 3b. Half the measured capacity: the latency when the machine is not saturated.
     const halfRate = Math.max(10, Math.round(capacity.count() / capacity.seconds / 2 / 10) * 10);
-    const atHalf = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 5, connections: 4, durationS: args.durationS, overallRate: halfRate, choose: weightedKind, build }));
-    printTally(`at half the measured capacity: the mix at ${halfRate} req/s offered, 2 API processes, ${args.durationS} s`, atHalf, MIX.map((m) => m.kind));
+    const atHalf = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: 2, durationS: args.durationS, overallRate: halfRate, choose: weightedKind, build }));
+    printTally(`at half the measured capacity: the mix at ${halfRate} req/s offered (${perPort * ports.api.length} instances x 2 connections), 2 API processes, ${args.durationS} s`, atHalf, MIX.map((m) => m.kind));
     failed += atHalf.failed() + atHalf.socketErrors + atHalf.timeouts;
 
     // 4. Scale: list latency by lab size, one request at a time.

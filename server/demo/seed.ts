@@ -29,6 +29,9 @@ export async function ensureBuiltInRuleSets(sequelize: Sequelize): Promise<numbe
 export async function seedDemo(sequelize: Sequelize): Promise<{ created: boolean }> {
   await ensureBuiltInRuleSets(sequelize);
   const outcome = await asSystem(sequelize, async (transaction) => {
+    // Two processes seeding at once (API test files in parallel, two servers starting together)
+    // would both find no demo lab and both create it: the second waits here, then finds it.
+    await sequelize.query("SELECT pg_advisory_xact_lock(hashtext('sidecheck:seed-demo'))", { transaction });
     if (await Organization.findOne({ where: { code: DEMO_LAB.code }, transaction })) return { created: false };
     const lab = await Organization.create({ kind: 'lab', ...DEMO_LAB }, { transaction });
     const maker = await Organization.create({ kind: 'manufacturer', ...DEMO_MANUFACTURER }, { transaction });

@@ -23,6 +23,8 @@ export function toProblem(error: unknown): Problem | null {
     const lost = (error as DatabaseError).original?.message ?? error.message;
     if (!code && PG_CONNECTION_LOST.test(lost)) return serviceUnavailable('The connection to the database was lost. Try again in a few seconds.');
     if (code === '22P02') return notFound('The requested record'); // malformed uuid in a path
+    // A NUL byte or a broken UTF-8 sequence in a value PostgreSQL was asked to read.
+    if (code === '22021') return badRequest('The request contains a character that cannot be stored (a NUL byte or broken UTF-8).');
   }
   if (e?.code && PG_CONNECTION_CODES.has(e.code)) return serviceUnavailable('The database is not reachable right now.');
   if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) return badRequest('The request could not be read.');

@@ -74,12 +74,26 @@ function send(res: Response, value: unknown, status: number): void {
   res.status(status).json(value);
 }
 
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * A record's id in the path (`:id`, `:caseId`, `:userId` ...) that is not a UUID names no record:
+ * 404 before any query, as PostgreSQL's refusal of a malformed uuid was answered (and a NUL byte,
+ * which PostgreSQL refuses in any text, never reaches it).
+ */
+function refuseMalformedIds(params: Record<string, string>): void {
+  for (const [name, value] of Object.entries(params)) {
+    if ((name === 'id' || name.endsWith('Id')) && !UUID.test(value)) throw notFound('The requested record');
+  }
+}
+
 /** Mount route definitions: access check, schema, one tenant transaction, answer after commit. */
 export function buildRouter(sequelize: Sequelize, routes: RouteDef[]): express.Router {
   const router = express.Router();
   for (const def of routes) {
     router[def.method](def.path, async (req: AuthedRequest, res: Response) => {
       const claimed = resolveAccess(def, req);
+      refuseMalformedIds(req.params as Record<string, string>);
       const { organizationId } = claimed;
       let status = def.method === 'post' ? 201 : 200;
       const context = (transaction: RouteContext['transaction'], roles: Role[], body: unknown): RouteContext => ({

@@ -34,7 +34,7 @@ describe('issuing a report', () => {
     const issued = await reviewer('post', `/runs/${run.id}/issue`);
     if (issued.status !== 201) console.error(JSON.stringify(t.logs.slice(-1)));
     expect(issued.status).toBe(201);
-    expect(issued.body.reportNumber).toMatch(/^T[0-9A-F]{6}-\d{4}-0001$/);
+    expect(issued.body.reportNumber).toMatch(/^T[0-9A-Z]{7}-\d{4}-0001$/);
     expect(issued.body.sha256).toMatch(/^[0-9a-f]{64}$/);
     const detail = await reviewer('get', `/runs/${run.id}`);
     expect(detail.body.state).toBe('issued');

@@ -43,6 +43,8 @@ const HASHED_MATCHES = 20_000;
 /** The distinct words of a search (split at spaces); a run matches when every word begins one of its terms. */
 function searchWords(search: string | undefined): string[] {
   if (!search) return [];
+  // eslint-disable-next-line no-control-regex
+  if (/[\u0000-\u001f\u007f]/.test(search)) throw badRequest('The search cannot contain control characters.');
   const words = [...new Set(search.trim().split(/\s+/).filter(Boolean))];
   if (words.length > MAX_SEARCH_WORDS) throw badRequest(`Search with at most ${MAX_SEARCH_WORDS} words.`);
   return words;

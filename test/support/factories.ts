@@ -15,12 +15,14 @@ import type { TestKind } from '../../shared/rules/test-kind';
 export const TEST_PASSWORD = 'correct-horse-battery-42';
 let passwordHash: Promise<string> | null = null;
 
-const unique = () => crypto.randomBytes(3).toString('hex').toUpperCase();
+/** `length` random characters of [0-9A-Z]. Six hex digits were too few: with the thousands of people
+ * and organizations the API suites create in one database, two of them collided now and then. */
+const unique = (length = 10) => Array.from(crypto.randomBytes(length), (b) => (b % 36).toString(36)).join('').toUpperCase();
 
 export async function buildOrganization(sequelize: Sequelize, overrides: Partial<{ kind: 'lab' | 'manufacturer'; name: string }> = {}) {
   return asSystem(sequelize, (transaction) =>
     Organization.create(
-      { kind: overrides.kind ?? 'lab', name: overrides.name ?? `Test lab ${unique()}`, code: `T${unique()}`, addressLines: ['1 Test Street', 'Testville'], settings: {} },
+      { kind: overrides.kind ?? 'lab', name: overrides.name ?? `Test lab ${unique()}`, code: `T${unique(7)}`, addressLines: ['1 Test Street', 'Testville'], settings: {} },
       { transaction },
     ),
   );
