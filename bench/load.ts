@@ -7,7 +7,7 @@
  *   npm run bench:load                 (60 s phases)
  *   npm run bench:load -- --quick      (10 s phases)
  *   node node_modules/tsx/dist/cli.mjs bench/load.ts [--quick] [--duration 60] [--rate 300]
- *        [--connections 16] [--instances 60] [--reuse] [--keep-db] [--per-kind] [--kinds list,save]
+ *        [--connections 16] [--instances 10] [--reuse] [--keep-db] [--per-kind] [--kinds list,save]
  *
  * Works from a fresh clone after `npm run build` (or without it: when dist/server is missing the
  * server is compiled with tsc; the client is not needed, the API serves only /api here). Uses
@@ -26,12 +26,12 @@
  *     answered) with --connections per API process: the most this machine sustains.
  *  3. at the target rate: the same mix at --rate requests/s in total, then at half the capacity
  *     measured in 2 (the latency of a machine that is not saturated). autocannon limits a rate per
- *     connection by sending that connection's whole quota for a second back to back when the
- *     second begins, then waiting: ten instances of 8 connections (the first version of this
- *     bench) made a burst of 30 requests every 100 ms, a queue that took a saturated machine
- *     ~75 ms to drain. So the rate is spread over --instances instances (default 60) of two
- *     connections, each a few requests a second, their seconds staggered evenly: arrivals close
- *     to a steady 300 a second, as many independent people would make them.
+ *     connection by sending that connection's quota for a second back to back when the second
+ *     begins, then waiting; --instances autocannon instances (default 10: 8 connections each at
+ *     the target rate, 4 at half) have their seconds staggered evenly, so every 100 ms a group of
+ *     requests arrives together. --instances 60 spreads the same rate over 60 instances of two
+ *     connections, closer to a steady stream (on 2026-12-05 that gave lower medians but no lower
+ *     p99 at 300 req/s: the tail there comes from the machine, not from the bursts).
  *  4. scale: sequential run-list requests in labs of 100, 1,000 and 10,000 runs.
  *  (--per-kind: before 2, each kind alone, closed loop, with the server CPU it costs per request.
  *   --kinds list,save: only those kinds alone, then stop; for profiling, LOAD_API_NODE_ARGS adds
@@ -100,7 +100,7 @@ function readArgs(argv: string[]): Args {
     durationS: value('--duration') ?? (quick ? 10 : 60),
     rate: value('--rate') ?? TARGETS.sustainedRps,
     connections: value('--connections') ?? 16,
-    instances: value('--instances') ?? 60,
+    instances: value('--instances') ?? 10,
     reuse: argv.includes('--reuse'),
     keepDb: argv.includes('--keep-db'),
     perKind: argv.includes('--per-kind') || argv.includes('--kinds'),
@@ -364,6 +364,8 @@ async function drive(options: { ports: number[]; instancesPerPort: number; conne
   for (let i = 0; i < options.instancesPerPort; i++) {
     for (const port of options.ports) {
       const delayMs = options.overallRate ? Math.round((n * 1000) / total) : 0;
+      // The rate split over the instances, the remainder one each to the first ones (180 over 60 is 3 each, 160 is 3 or 2).
+      const rate = options.overallRate && Math.max(1, Math.floor(options.overallRate / total) + (n < options.overallRate % total ? 1 : 0));
       n++;
       runs.push(sleep(delayMs).then(() => new Promise<void>((resolve, reject) => {
         const instance = autocannon(
@@ -371,7 +373,7 @@ async function drive(options: { ports: number[]; instancesPerPort: number; conne
             url: `http://127.0.0.1:${port}`,
             connections: options.connections,
             duration: options.durationS,
-            overallRate: options.overallRate && Math.max(1, Math.round(options.overallRate / total)),
+            overallRate: rate,
             timeout: 10,
             requests: [{
               setupRequest: (req, context) => {
@@ -587,14 +589,15 @@ async function main(): Promise<void> {
 
     // 3. The target rate.
     const perPort = Math.max(1, Math.round(args.instances / ports.api.length));
-    const atRate = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: 2, durationS: args.durationS, overallRate: args.rate, choose: weightedKind, build }));
-    printTally(`at the target rate: the mix at ${args.rate} req/s offered (${perPort * ports.api.length} autocannon instances x 2 connections), 2 API processes, ${args.durationS} s`, atRate, MIX.map((m) => m.kind));
+    const spread = perPort * ports.api.length > 10;
+    const atRate = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 8, durationS: args.durationS, overallRate: args.rate, choose: weightedKind, build }));
+    printTally(`at the target rate: the mix at ${args.rate} req/s offered (${perPort * ports.api.length} autocannon instances x ${spread ? 2 : 8} connections), 2 API processes, ${args.durationS} s`, atRate, MIX.map((m) => m.kind));
     failed += atRate.failed() + atRate.socketErrors + atRate.timeouts;
 
     // 3b. Half the measured capacity: the latency when the machine is not saturated.
     const halfRate = Math.max(10, Math.round(capacity.count() / capacity.seconds / 2 / 10) * 10);
-    const atHalf = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: 2, durationS: args.durationS, overallRate: halfRate, choose: weightedKind, build }));
-    printTally(`at half the measured capacity: the mix at ${halfRate} req/s offered (${perPort * ports.api.length} instances x 2 connections), 2 API processes, ${args.durationS} s`, atHalf, MIX.map((m) => m.kind));
+    const atHalf = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 4, durationS: args.durationS, overallRate: halfRate, choose: weightedKind, build }));
+    printTally(`at half the measured capacity: the mix at ${halfRate} req/s offered (${perPort * ports.api.length} instances x ${spread ? 2 : 4} connections), 2 API processes, ${args.durationS} s`, atHalf, MIX.map((m) => m.kind));
     failed += atHalf.failed() + atHalf.socketErrors + atHalf.timeouts;
 
     // 4. Scale: list latency by lab size, one request at a time.
