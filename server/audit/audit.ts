@@ -1,6 +1,11 @@
 import { AuditEntry } from '../db/models';
 import type { RouteContext } from '../http/route';
 
+/** The bench-automation key a request came with (server/api-keys/identify-api-key.ts), or null. */
+export function apiKeyIdOf(req: RouteContext['req'] | undefined): string | null {
+  return (req as { apiKey?: { keyId: string } | null } | undefined)?.apiKey?.keyId ?? null;
+}
+
 /** Append one entry to the audit log, inside the caller's transaction (so it commits with the change). */
 export async function audit(
   ctx: Pick<RouteContext, 'principal' | 'organizationId' | 'transaction'> & { req?: RouteContext['req'] },
@@ -11,7 +16,7 @@ export async function audit(
       organizationId: ctx.organizationId,
       userId: ctx.principal?.userId ?? null,
       // A change made with a bench-automation key names the key (server/api-keys/identify-api-key.ts).
-      apiKeyId: (ctx.req as { apiKey?: { keyId: string } | null } | undefined)?.apiKey?.keyId ?? null,
+      apiKeyId: apiKeyIdOf(ctx.req),
       action: entry.action,
       entity: entry.entity,
       entityId: entry.entityId ?? null,

@@ -6,8 +6,7 @@
  * planning anew, as for lookups by primary key), and no model instances are built for rows that
  * are only read. A statement whose best plan depends on its values (the run list: a search
  * pattern, a rare or common state) goes `unnamed`: planned for its values each time, still with
- * parameters and without Sequelize. Everything else goes
- * through Sequelize models. Errors are wrapped as Sequelize's DatabaseError, so the error handler
+ * parameters and without Sequelize. Everything else goes through Sequelize models. Errors are wrapped as Sequelize's DatabaseError, so the error handler
  * answers them exactly like the rest (503 when the database is restarting, 404 for a malformed id).
  */
 import crypto from 'node:crypto';

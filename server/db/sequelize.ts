@@ -3,9 +3,9 @@ import { requestScope } from './request-scope';
 
 let clsInstalled = false;
 
-/** One Sequelize instance per process, joined to the request scope so queries find their transaction. */
 /**
- * `statementTimeoutMs` bounds every statement (30 s by default, so a runaway query cannot hold a
+ * One Sequelize instance per process, joined to the request scope so queries find their
+ * transaction. `statementTimeoutMs` bounds every statement (30 s by default, so a runaway query cannot hold a
  * connection); migrations pass 0, no limit, since rewriting a large table may take longer.
  */
 export function createSequelize(databaseUrl: string, options: { poolMax?: number; logging?: boolean; statementTimeoutMs?: number } = {}): Sequelize {

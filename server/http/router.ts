@@ -6,6 +6,7 @@ import { forbidden, notFound, unauthorized } from './problem';
 import { isFileAnswer, type Principal, type RouteContext, type RouteDef } from './route';
 import { validate } from './validation';
 import { Membership } from '../db/models';
+import { isUuid } from '../accounts/is-uuid';
 
 export interface ApiKeyPrincipal {
   organizationId: string;
@@ -74,8 +75,6 @@ function send(res: Response, value: unknown, status: number): void {
   res.status(status).json(value);
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 /**
  * A record's id in the path (`:id`, `:caseId`, `:userId` ...) that is not a UUID names no record:
  * 404 before any query, as PostgreSQL's refusal of a malformed uuid was answered (and a NUL byte,
@@ -83,7 +82,7 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
  */
 function refuseMalformedIds(params: Record<string, string>): void {
   for (const [name, value] of Object.entries(params)) {
-    if ((name === 'id' || name.endsWith('Id')) && !UUID.test(value)) throw notFound('The requested record');
+    if ((name === 'id' || name.endsWith('Id')) && !isUuid(value)) throw notFound('The requested record');
   }
 }
 

@@ -52,6 +52,11 @@ export function contributionsByBudget(instruments: RunInstrumentFacts[]): Partia
   return out;
 }
 
+/** The instruments as a stored result names them: which ones, and their calibration when it was computed. */
+export function instrumentsOnRecord(instruments: RunInstrumentFacts[]) {
+  return instruments.map((i) => ({ id: i.id, name: i.name, serialNumber: i.serialNumber, calibrationDue: i.calibrationDue, certificateRef: i.certificateRef }));
+}
+
 /** An instrument as listed on a run (detail, report): identification and calibration. */
 export function presentRunInstrument(i: Instrument, today: string) {
   return {

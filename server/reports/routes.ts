@@ -6,7 +6,8 @@ import { asSystem } from '../tenancy/tenant-transaction';
 import { loadRun } from '../runs/run-service';
 import { issueReport, listReports, loadReport, presentReport, reportStatus, withdrawReport, type ReportDeps } from './report-service';
 import { reasonSchema } from '../../shared/schemas/records';
-import { runDetail, transition } from '../runs/run-service';
+import { transition } from '../runs/run-service';
+import { runDetail } from '../runs/run-detail';
 
 const READERS = ['lab-admin', 'engineer', 'reviewer', 'billing', 'manufacturer-admin', 'manufacturer-viewer'] as const;
 

@@ -111,5 +111,3 @@ export async function runDetail(transaction: Transaction, runId: string) {
     })),
   };
 }
-
-export type RunDetail = Awaited<ReturnType<typeof runDetail>>;

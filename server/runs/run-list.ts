@@ -86,15 +86,18 @@ export async function listRuns(transaction: Transaction, organizationId: string,
   if (q.filter.engineerId) where.push(`r.engineer_id = ${param(q.filter.engineerId)}::uuid`);
   const column = RUN_SORT_COLUMNS[q.sort];
   const order = `r.${column} ${q.direction}, r.id ${q.direction}`;
-  const total = matched && !stateIs && !q.filter.engineerId
-    ? `SELECT ${param(matches)}::bigint AS n`
+  // A search alone has its total already; other filters count their runs; no filter, or states
+  // alone, read the per-state counts.
+  const searchOnly = !!matched && !stateIs && !q.filter.engineerId;
+  const total = searchOnly
+    ? null
     : matched || q.filter.engineerId
       ? `SELECT count(*) AS n FROM test_runs r WHERE ${where.join(' AND ')}`
       : `SELECT coalesce(sum(n), 0) AS n FROM run_state_counts WHERE organization_id = $1${stateIs ? ` AND ${stateIs}` : ''}`;
   const limit = param(q.pageSize);
   const offset = param((q.page - 1) * q.pageSize);
   // The total is an uncorrelated subquery: PostgreSQL evaluates it once per statement (an InitPlan).
-  const sql = `SELECT (${total}) AS total, r.id, r.number, r.state, r.updated_at AS "updatedAt", r.created_at AS "createdAt", r.engineer_id AS "engineerId",
+  const sql = `SELECT ${total ? `(${total})` : 'NULL'} AS total, r.id, r.number, r.state, r.updated_at AS "updatedAt", r.created_at AS "createdAt", r.engineer_id AS "engineerId",
             p.name AS "planName", d.manufacturer, d.model, d.serial_number AS "serialNumber", r.client_name AS client
        FROM (SELECT r.id, r.plan_id, r.number, r.state, r.updated_at, r.created_at, r.engineer_id, r.client_name, r.device_model
                FROM test_runs r WHERE ${where.join(' AND ')} ORDER BY ${order} LIMIT ${limit} OFFSET ${offset}) r
@@ -104,10 +107,10 @@ export async function listRuns(transaction: Transaction, organizationId: string,
   // Planned for its values each time (server/db/prepared-query.ts): the best plan for a rare
   // state or a search differs from the one for the whole list.
   const rows = await preparedRows<RunListItem & { total: string }>(transaction, sql, values, { unnamed: true });
-  if (rows.length) return page(rows.map(({ total: _total, ...item }) => item), Number(rows[0].total), q);
+  if (rows.length) return page(rows.map(({ total: _total, ...item }) => item), total ? Number(rows[0].total) : matches, q);
   // An empty page: no match at all on page 1, or a page past the end (its total still counts).
   if (q.page === 1) return page([], 0, q);
-  if (matched && !stateIs && !q.filter.engineerId) return page([], matches, q);
+  if (!total) return page([], matches, q);
   const [counted] = await preparedRows<{ n: string }>(transaction, total, values.slice(0, values.length - 2), { unnamed: true });
   return page([], Number(counted.n), q);
 }

@@ -16,7 +16,10 @@ export function presentRun(r: TestRun) {
   };
 }
 
-export function presentResult(r: Result) {
+/** What a reading's result presentation reads: a model instance, or the row just written (save-reading.ts). */
+export type ReadingResultFacts = Pick<Result, 'id' | 'readingId' | 'engineVersion' | 'value' | 'unit' | 'limitValue' | 'margin' | 'expandedUncertainty' | 'coverageFactor' | 'verdict' | 'detail' | 'createdAt'>;
+
+export function presentResult(r: ReadingResultFacts) {
   return {
     id: r.id,
     readingId: r.readingId,

@@ -14,9 +14,6 @@ import { assignedInstruments, refuseOverdue } from '../instruments/run-instrumen
 import { todayIso } from '../instruments/calibration-status';
 import { runDetail } from './run-detail';
 
-export { runDetail } from './run-detail';
-export { saveReading } from './save-reading';
-
 export async function loadRun(id: string) {
   const run = await TestRun.findByPk(id);
   if (!run) throw notFound('The test run');

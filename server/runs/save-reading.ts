@@ -11,7 +11,9 @@ import type { TestCase } from '../db/models';
 import { evaluateTestCase, EvaluationError } from '../../shared/evaluation/evaluate-test-case';
 import { ENGINE_VERSION } from '../../shared/engine-version';
 import { READING_FIELDS, type ReadingValues } from '../../shared/evaluation/reading-fields';
-import { contributionsByBudget, refuseOverdue } from '../instruments/run-instruments';
+import { contributionsByBudget, instrumentsOnRecord, refuseOverdue } from '../instruments/run-instruments';
+import { apiKeyIdOf } from '../audit/audit';
+import { presentResult } from './run-presenter';
 import { loadRunCaseTarget } from './run-case-target';
 import { todayIso } from '../instruments/calibration-status';
 
@@ -62,10 +64,10 @@ export async function saveReading(ctx: RouteContext, runId: string, caseId: stri
     budget: computed.uncertainty.rows,
     inputs: computed.detail,
     combinedStandard: computed.uncertainty.combinedStandard,
-    instruments: target.instruments.map((i) => ({ id: i.id, name: i.name, serialNumber: i.serialNumber, calibrationDue: i.calibrationDue, certificateRef: i.certificateRef })),
+    instruments: instrumentsOnRecord(target.instruments),
   };
   const userId = ctx.principal?.userId ?? null;
-  const apiKeyId = (ctx.req as { apiKey?: { keyId: string } | null }).apiKey?.keyId ?? null;
+  const apiKeyId = apiKeyIdOf(ctx.req);
   const [saved] = await preparedRows<{ readingId: string; readingCreatedAt: Date; resultId: string | null; resultCreatedAt: Date | null }>(transaction, SAVE_WRITE, [
     organizationId,
     runId,
@@ -86,21 +88,21 @@ export async function saveReading(ctx: RouteContext, runId: string, caseId: stri
     JSON.stringify({ testCaseId: target.caseId, values, verdict: computed?.verdict ?? null }),
   ]);
   const result =
-    computed && saved.resultId
-      ? {
+    computed && detail && saved.resultId && saved.resultCreatedAt
+      ? presentResult({
           id: saved.resultId,
           readingId: saved.readingId,
           engineVersion: ENGINE_VERSION,
           value: computed.value,
           unit: computed.unit,
-          limit: computed.limit,
+          limitValue: computed.limit,
           margin: computed.margin,
           expandedUncertainty: computed.uncertainty.expanded,
           coverageFactor: computed.uncertainty.coverageFactor,
           verdict: computed.verdict,
-          detail: detail!,
-          createdAt: saved.resultCreatedAt!.toISOString(),
-        }
+          detail,
+          createdAt: saved.resultCreatedAt,
+        })
       : null;
   return { reading: { id: saved.readingId, values, createdAt: saved.readingCreatedAt.toISOString() }, result, problem };
 }

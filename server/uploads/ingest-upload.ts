@@ -1,7 +1,7 @@
 import crypto from 'node:crypto';
 import { uploadFieldsSchema, type UploadFields } from '../../shared/schemas/uploads';
 import type { RouteContext } from '../http/route';
-import { contributionsByBudget } from '../instruments/run-instruments';
+import { contributionsByBudget, instrumentsOnRecord } from '../instruments/run-instruments';
 import { evaluateUpload, uploadResultDetail } from '../analysis/evaluate-upload';
 import { prepareUpload } from './prepare-upload';
 import type { ReceivedUpload } from './receive-multipart';
@@ -29,7 +29,7 @@ export async function ingestUpload(
   const detail = uploadResultDetail(evaluation, {
     summary: prepared.summary,
     rules,
-    instruments: instruments.map((i) => ({ id: i.id, name: i.name, serialNumber: i.serialNumber, calibrationDue: i.calibrationDue, certificateRef: i.certificateRef })),
+    instruments: instrumentsOnRecord(instruments),
   });
   const parameters = { ...prepared.fields, carrierHz: prepared.carrierHz, sideband: prepared.sideband };
   const { upload, result } = await recordUpload(deps, ctx, { uploadId: crypto.randomUUID(), runId: target.runId, testCaseId: target.caseId, prepared, parameters, evaluation, detail });

@@ -2,6 +2,8 @@ import type { TraceEvaluation } from '../../shared/evaluation/evaluate-trace';
 import { ENGINE_VERSION } from '../../shared/engine-version';
 import type { Upload } from '../db/models';
 import { preparedRows } from '../db/prepared-query';
+import { apiKeyIdOf } from '../audit/audit';
+import { todayIso } from '../instruments/calibration-status';
 import type { UploadFacts, UploadResultFacts } from './upload-presenter';
 import { conflict } from '../http/problem';
 import type { RouteContext } from '../http/route';
@@ -16,9 +18,10 @@ import { storageProblem } from './upload-problems';
  * Keeps an analysed upload: the raw files go into the store unchanged under keys built from the
  * organization and a new upload id (`uploads/<org>/<id>/file`, `.../data`), then ONE tenant
  * transaction re-checks that the run is still on the bench (locking it) and writes the upload row,
- * its result, the run's last test date and the audit entry, in one prepared statement (the analysis,
- * tens of kilobytes of JSON, goes as a parameter rather than into the SQL text). Whole or nothing: a storage failure removes what was already stored (and
- * answers 507 or 500); a database failure removes the stored files before the error goes on.
+ * its result, the run's last test date and the audit entry, in one prepared statement (the
+ * analysis, tens of kilobytes of JSON, goes as a parameter rather than into the SQL text). Whole
+ * or nothing: a storage failure removes what was already stored (and answers 507 or 500); a
+ * database failure removes the stored files before the error goes on.
  */
 export async function recordUpload(
   deps: UploadDeps,
@@ -46,8 +49,8 @@ export async function recordUpload(
     return await inTenant(deps.sequelize, org, async (transaction) => {
       const e = input.evaluation;
       const userId = ctx.principal?.userId ?? null;
-      const apiKeyId = (ctx.req as { apiKey?: { keyId: string } | null }).apiKey?.keyId ?? null;
-      const today = new Date().toISOString().slice(0, 10);
+      const apiKeyId = apiKeyIdOf(ctx.req);
+      const today = todayIso();
       const audited = { runId: input.runId, testCaseId: input.testCaseId, format: prepared.format, fileName: prepared.file.keptName, fileSha256: prepared.file.sha256, dataSha256: prepared.data?.sha256 ?? null, verdict: e.verdict };
       const [row] = await preparedRows<{ state: string | null; uploadCreatedAt: Date | null; resultId: string | null; resultCreatedAt: Date | null }>(transaction, RECORD_UPLOAD, [
         org, input.runId, input.uploadId, input.testCaseId, prepared.format, prepared.file.keptName, keys.file, prepared.file.sizeBytes, prepared.file.sha256,
