@@ -13,7 +13,16 @@ import crypto from 'node:crypto';
 import { DatabaseError, type Transaction } from 'sequelize';
 
 interface PgConnection {
-  query(config: { name?: string; text: string; values: unknown[] }): Promise<{ rows: Record<string, unknown>[] }>;
+  query(config: { name?: string; text: string; values?: unknown[] }): Promise<{ rows: Record<string, unknown>[] }>;
+}
+
+/** The parts of Sequelize's Transaction used to finish it here (see `thenCommit`). */
+interface OpenTransaction {
+  connection?: PgConnection;
+  finished?: string;
+  _afterCommitHooks: ((t: Transaction) => unknown)[];
+  cleanup(): void;
+  forceCleanup(): Promise<void>;
 }
 
 const names = new Map<string, string>();
@@ -28,16 +37,56 @@ function nameOf(text: string): string {
   return name;
 }
 
-/** Rows of `text` ($1, $2 ... placeholders) run in `transaction`, as a named prepared statement unless `unnamed`. */
-export async function preparedRows<T = Record<string, unknown>>(transaction: Transaction, text: string, values: unknown[], options: { unnamed?: boolean } = {}): Promise<T[]> {
-  const connection = (transaction as unknown as { connection?: PgConnection }).connection;
+function connectionOf(transaction: Transaction): PgConnection {
+  const connection = (transaction as unknown as OpenTransaction).connection;
   if (!connection) throw new Error('preparedRows needs a transaction with its connection');
+  return connection;
+}
+
+function asDatabaseError(error: unknown, text: string): DatabaseError {
+  const e = error as Error & { sql?: string; parameters?: unknown[] };
+  e.sql = text;
+  return new DatabaseError(e as never);
+}
+
+/** Rows of a query already written, or its error as Sequelize's DatabaseError. */
+async function rowsOf<T>(query: Promise<{ rows: Record<string, unknown>[] }>, text: string): Promise<T[]> {
   try {
-    const result = await connection.query(options.unnamed ? { text, values } : { name: nameOf(text), text, values });
-    return result.rows as T[];
+    return (await query).rows as T[];
   } catch (error) {
-    const e = error as Error & { sql?: string; parameters?: unknown[] };
-    e.sql = text;
-    throw new DatabaseError(e as never);
+    throw asDatabaseError(error, text);
   }
+}
+
+/**
+ * Rows of `text` ($1, $2 ... placeholders) run in `transaction`, as a named prepared statement unless `unnamed`.
+ * `thenCommit`: the statement is the transaction's last. Its COMMIT is written right behind it
+ * (the connection is in pipeline mode, db/sequelize.ts): one round trip for both, and the
+ * transaction ends here, committed (or rolled back, when the statement failed: PostgreSQL
+ * answers the COMMIT of a failed transaction with a ROLLBACK). tenancy/tenant-transaction.ts then
+ * has nothing left to commit.
+ */
+export async function preparedRows<T = Record<string, unknown>>(transaction: Transaction, text: string, values: unknown[], options: { unnamed?: boolean; thenCommit?: boolean } = {}): Promise<T[]> {
+  const connection = connectionOf(transaction);
+  const rows = rowsOf<T>(connection.query(options.unnamed ? { text, values } : { name: nameOf(text), text, values }), text);
+  if (!options.thenCommit) return rows;
+  const open = transaction as unknown as OpenTransaction;
+  const committed = rowsOf(connection.query({ text: 'COMMIT' }), 'COMMIT');
+  const [statement, commit] = await Promise.allSettled([rows, committed]);
+  if (commit.status === 'rejected') {
+    // The connection's state is unknown: destroyed rather than returned to the pool (as Sequelize does).
+    open.finished = 'commit';
+    await open.forceCleanup();
+    throw statement.status === 'rejected' ? statement.reason : commit.reason;
+  }
+  open.finished = statement.status === 'fulfilled' ? 'commit' : 'rollback';
+  open.cleanup();
+  if (statement.status === 'rejected') throw statement.reason;
+  for (const hook of open._afterCommitHooks) await hook(transaction);
+  return statement.value;
+}
+
+/** Writes `text` (no parameters) on the transaction's connection now; the promise settles with its answer. */
+export function sendStatement(transaction: Transaction, text: string): Promise<unknown> {
+  return rowsOf(connectionOf(transaction).query({ text }), text);
 }

@@ -60,7 +60,7 @@ export function runRoutes(sequelize: Sequelize, mail: Omit<RunMailDeps, 'sequeli
       summary: 'A run with its test cases, latest readings and results',
       access: { kind: 'member', roles: LAB },
       async handler(ctx) {
-        return runDetail(ctx.transaction!, ctx.params.id);
+        return runDetail(ctx.transaction!, ctx.params.id, { thenCommit: true });
       },
     }),
     route<SaveReadingBody>({

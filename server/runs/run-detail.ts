@@ -95,9 +95,12 @@ interface DetailRow {
   testCases: CaseRow[];
 }
 
-/** The workspace of run `runId`, or a 404 when there is no such run in the organization. */
-export async function runDetail(transaction: Transaction, runId: string) {
-  const [row] = await preparedRows<DetailRow>(transaction, RUN_DETAIL, [runId]);
+/**
+ * The workspace of run `runId`, or a 404 when there is no such run in the organization.
+ * `thenCommit` when it is the transaction's last statement (server/db/prepared-query.ts).
+ */
+export async function runDetail(transaction: Transaction, runId: string, options: { thenCommit?: boolean } = {}) {
+  const [row] = await preparedRows<DetailRow>(transaction, RUN_DETAIL, [runId], options);
   if (!row) throw notFound('The test run');
   const today = todayIso();
   const { instruments, testCases, ...run } = row;

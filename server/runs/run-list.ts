@@ -97,20 +97,22 @@ export async function listRuns(transaction: Transaction, organizationId: string,
   const limit = param(q.pageSize);
   const offset = param((q.page - 1) * q.pageSize);
   // The total is an uncorrelated subquery: PostgreSQL evaluates it once per statement (an InitPlan).
-  const sql = `SELECT ${total ? `(${total})` : 'NULL'} AS total, r.id, r.number, r.state, r.updated_at AS "updatedAt", r.created_at AS "createdAt", r.engineer_id AS "engineerId",
-            p.name AS "planName", d.manufacturer, d.model, d.serial_number AS "serialNumber", r.client_name AS client
-       FROM (SELECT r.id, r.plan_id, r.number, r.state, r.updated_at, r.created_at, r.engineer_id, r.client_name, r.device_model
-               FROM test_runs r WHERE ${where.join(' AND ')} ORDER BY ${order} LIMIT ${limit} OFFSET ${offset}) r
-       JOIN test_plans p ON p.organization_id = $1 AND p.id = r.plan_id
-       JOIN devices d ON d.organization_id = $1 AND d.id = p.device_id
-      ORDER BY ${order}`;
+  // The page is joined to it, so a page past the end still answers one row, with the total: this
+  // statement is always the request's last, and its COMMIT goes with it (server/db/prepared-query.ts).
+  const sql = `SELECT t.total, x.id, x.number, x.state, x.updated_at AS "updatedAt", x.created_at AS "createdAt", x.engineer_id AS "engineerId",
+            x.plan_name AS "planName", x.manufacturer, x.model, x.serial_number AS "serialNumber", x.client_name AS client
+       FROM (SELECT ${total ? `(${total})` : 'NULL'} AS total) t
+       LEFT JOIN (SELECT r.id, r.number, r.state, r.updated_at, r.created_at, r.engineer_id, r.client_name, r.device_model,
+                         p.name AS plan_name, d.manufacturer, d.model, d.serial_number
+                    FROM (SELECT r.id, r.plan_id, r.number, r.state, r.updated_at, r.created_at, r.engineer_id, r.client_name, r.device_model
+                            FROM test_runs r WHERE ${where.join(' AND ')} ORDER BY ${order} LIMIT ${limit} OFFSET ${offset}) r
+                    JOIN test_plans p ON p.organization_id = $1 AND p.id = r.plan_id
+                    JOIN devices d ON d.organization_id = $1 AND d.id = p.device_id) x ON true
+      ORDER BY x.${column} ${q.direction}, x.id ${q.direction}`;
   // Planned for its values each time (server/db/prepared-query.ts): the best plan for a rare
   // state or a search differs from the one for the whole list.
-  const rows = await preparedRows<RunListItem & { total: string }>(transaction, sql, values, { unnamed: true });
-  if (rows.length) return page(rows.map(({ total: _total, ...item }) => item), total ? Number(rows[0].total) : matches, q);
-  // An empty page: no match at all on page 1, or a page past the end (its total still counts).
-  if (q.page === 1) return page([], 0, q);
-  if (!total) return page([], matches, q);
-  const [counted] = await preparedRows<{ n: string }>(transaction, total, values.slice(0, values.length - 2), { unnamed: true });
-  return page([], Number(counted.n), q);
+  const rows = await preparedRows<(RunListItem & { total: string | null }) | { total: string | null; id: null }>(transaction, sql, values, { unnamed: true, thenCommit: true });
+  const known = rows[0].total === null ? matches : Number(rows[0].total);
+  const items = rows.filter((row): row is RunListItem & { total: string | null } => row.id !== null).map(({ total: _total, ...item }) => item);
+  return page(items, known, q);
 }

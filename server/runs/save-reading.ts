@@ -86,7 +86,7 @@ export async function saveReading(ctx: RouteContext, runId: string, caseId: stri
     today,
     apiKeyId,
     JSON.stringify({ testCaseId: target.caseId, values, verdict: computed?.verdict ?? null }),
-  ]);
+  ], { thenCommit: true }); // the request's last statement: its COMMIT goes with it
   const result =
     computed && detail && saved.resultId && saved.resultCreatedAt
       ? presentResult({

@@ -1,5 +1,5 @@
 import { ImportError } from './import-error';
-import { parseCsvNumber } from './parse-csv-number';
+import { parseCsvNumberAt } from './parse-csv-number';
 import { readTraceHeader, type TraceHeader } from './read-trace-header';
 import { FREQUENCY_UNIT_HZ, levelToDbm, normalizeUnit, type LevelUnit } from './trace-units';
 
@@ -47,6 +47,21 @@ export function parseTraceCsv(text: string): ImportedTrace {
   let rbwIndex = -1;
   let hzPerUnit = 1;
   let levelUnit: LevelUnit = 'dbm';
+  let delimiter = ',';
+  let decimalComma = false;
+  let needed = 0;
+  let previous = 0;
+  // Where each needed field of the current line starts and ends.
+  const starts: number[] = [];
+  const ends: number[] = [];
+  const fieldNumber = (content: string, index: number, what: string, line: number): number => {
+    const value = parseCsvNumberAt(content, starts[index], ends[index], decimalComma);
+    if (Number.isNaN(value)) {
+      const detail = `${what} "${content.slice(starts[index], ends[index]).trim()}" is not a number`;
+      throw new ImportError(NAME, detail, { line, column: index + 1 });
+    }
+    return value;
+  };
 
   for (let k = 0; k < lines.length; k++) {
     const line = k + 1;
@@ -72,40 +87,42 @@ export function parseTraceCsv(text: string): ImportedTrace {
       const l = header.columns[levelIndex];
       if (f.role === 'frequency') hzPerUnit = f.hzPerUnit;
       if (l.role === 'level') levelUnit = l.unit;
+      delimiter = header.delimiter;
+      decimalComma = delimiter !== ',';
+      needed = Math.max(freqIndex, levelIndex, rbwIndex) + 1;
       continue;
     }
-    const decimalComma = header.delimiter !== ',';
-    const fields = content.split(header.delimiter);
-    const needed = Math.max(freqIndex, levelIndex, rbwIndex) + 1;
-    if (fields.length < needed) {
-      const detail = `${fields.length} field(s), the header has ${header.columns.length}`;
-      throw new ImportError(NAME, detail, { line, column: fields.length });
+    // The fields needed, by position in the line, without splitting it (a trace has thousands of rows).
+    let count = 0;
+    for (let position = 0; count < needed; ) {
+      const next = content.indexOf(delimiter, position);
+      starts[count] = position;
+      ends[count] = next === -1 ? content.length : next;
+      count++;
+      if (next === -1) break;
+      position = next + 1;
     }
-    const number = (index: number, what: string): number => {
-      const value = parseCsvNumber(fields[index], decimalComma);
-      if (Number.isNaN(value)) {
-        const detail = `${what} "${fields[index].trim()}" is not a number`;
-        throw new ImportError(NAME, detail, { line, column: index + 1 });
-      }
-      return value;
-    };
-    const frequencyHz = number(freqIndex, 'frequency') * hzPerUnit;
-    const reading = number(levelIndex, 'level');
+    if (count < needed) {
+      const detail = `${count} field(s), the header has ${header.columns.length}`;
+      throw new ImportError(NAME, detail, { line, column: count });
+    }
+    const frequencyHz = fieldNumber(content, freqIndex, 'frequency', line) * hzPerUnit;
+    const reading = fieldNumber(content, levelIndex, 'level', line);
     const levelDbm = levelToDbm(reading, levelUnit);
     if (Number.isNaN(levelDbm)) {
       const detail = `level ${reading} ${levelUnit} must be > 0 to be expressed in dBm`;
       throw new ImportError(NAME, detail, { line, column: levelIndex + 1 });
     }
-    const previous = frequencies[frequencies.length - 1];
-    if (previous !== undefined && !(frequencyHz > previous)) {
+    if (frequencies.length > 0 && !(frequencyHz > previous)) {
       const detail =
         `frequency ${frequencyHz} Hz is not above the previous row's ${previous} Hz ` +
         '(rows must ascend in frequency)';
       throw new ImportError(NAME, detail, { line, column: freqIndex + 1 });
     }
+    previous = frequencyHz;
     if (rbwIndex >= 0) {
       const rbwColumn = header.columns[rbwIndex] as { hzPerUnit: number };
-      const rowRbwHz = number(rbwIndex, 'RBW') * rbwColumn.hzPerUnit;
+      const rowRbwHz = fieldNumber(content, rbwIndex, 'RBW', line) * rbwColumn.hzPerUnit;
       if (!(Number.isFinite(rowRbwHz) && rowRbwHz > 0)) {
         throw new ImportError(NAME, `RBW ${rowRbwHz} Hz is not a bandwidth above 0 Hz`, { line, column: rbwIndex + 1 });
       }

@@ -33,6 +33,10 @@ export function decimateMinMax(
   const x0 = x[0];
   const span = x[n - 1] - x0 || 1;
   const out: XyPoints = { x: [], y: [] };
+  const keep = (k: number) => {
+    out.x.push(x[k]);
+    out.y.push(y[k]);
+  };
   const bucketOf = (k: number) =>
     Math.min(bucketCount - 1, Math.floor(((x[k] - x0) / span) * bucketCount));
   let i = 0;
@@ -51,12 +55,17 @@ export function decimateMinMax(
       if (lo < 0 || v < y[lo]) lo = i;
       if (hi < 0 || v > y[hi]) hi = i;
     }
-    const candidates = [first, lo, hi].filter((k) => k >= 0 && Number.isFinite(y[k]));
-    const keep = [...new Set(candidates)].sort((a, b) => a - b);
-    for (const k of keep) {
-      out.x.push(x[k]);
-      out.y.push(y[k]);
-    }
+    // first (when it is a value), lowest and highest, each once, in x order: without arrays,
+    // since a long trace has thousands of buckets.
+    let a = Number.isFinite(y[first]) ? first : -1;
+    let b = lo;
+    let c = hi;
+    if (a > b) [a, b] = [b, a];
+    if (b > c) [b, c] = [c, b];
+    if (a > b) [a, b] = [b, a];
+    if (a >= 0) keep(a);
+    if (b >= 0 && b !== a) keep(b);
+    if (c >= 0 && c !== b) keep(c);
     if (gap) {
       out.x.push(x[i - 1]);
       out.y.push(Number.NaN);
