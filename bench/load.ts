@@ -8,6 +8,7 @@
  *   npm run bench:load -- --quick      (10 s phases)
  *   node node_modules/tsx/dist/cli.mjs bench/load.ts [--quick] [--duration 60] [--rate 300]
  *        [--connections 16] [--instances 10] [--reuse] [--keep-db] [--per-kind] [--kinds list,save]
+ *        [--weights upload=0,sign-in=0]
  *
  * Works from a fresh clone after `npm run build` (or without it: when dist/server is missing the
  * server is compiled with tsc; the client is not needed, the API serves only /api here). Uses
@@ -301,11 +302,22 @@ function requestFactory(labs: LabFixture[]) {
   };
 }
 
+/** The mix's weights, unless `--weights upload=0,sign-in=0` changes some (to tell apart what each kind does to the others). */
+const weights: Record<string, number> = Object.fromEntries(MIX.map((m) => [m.kind, m.weight]));
+const weightsArg = process.argv.indexOf('--weights');
+if (weightsArg > 0) {
+  for (const pair of (process.argv[weightsArg + 1] ?? '').split(',')) {
+    const [kind, weight] = pair.split('=');
+    if (!(kind in weights) || !(Number(weight) >= 0)) throw new Error(`--weights: "${pair}" is not kind=weight for a kind of the mix`);
+    weights[kind] = Number(weight);
+  }
+}
+
 function weightedKind(): Kind {
-  const total = MIX.reduce((s, m) => s + m.weight, 0);
+  const total = MIX.reduce((s, m) => s + weights[m.kind], 0);
   let x = Math.random() * total;
   for (const m of MIX) {
-    x -= m.weight;
+    x -= weights[m.kind];
     if (x < 0) return m.kind;
   }
   return MIX[0].kind;
@@ -320,7 +332,7 @@ class Tally {
   socketErrors = 0;
   timeouts = 0;
   seconds = 0;
-  cpu: { apiMsPerRequest: number; pgMsPerRequest: number } | null = null;
+  cpu: { apiMsPerRequest: number; eventLoopMsPerRequest: number; pgMsPerRequest: number } | null = null;
 
   record(kind: Kind, status: number, ms: number): void {
     if (!this.latencies.has(kind)) this.latencies.set(kind, []);
@@ -402,13 +414,17 @@ async function drive(options: { ports: number[]; instancesPerPort: number; conne
 }
 
 // ---------------------------------------------------------------------------------------------
-/** CPU time (user + system, ms) of processes, from /proc (Linux); `children` adds that of their reaped children. */
-function cpuMs(pids: number[], children = false): number {
+/**
+ * CPU time (user + system, ms) of processes, from /proc (Linux); `children` adds that of their
+ * reaped children; `mainThread` counts only each process's main thread (the event loop), not its
+ * worker threads (server/workers/heavy-pool.ts) or libuv's.
+ */
+function cpuMs(pids: number[], children = false, mainThread = false): number {
   const clockTicksPerSecond = 100; // USER_HZ on Linux
   let ticks = 0;
   for (const pid of pids) {
     try {
-      const fields = fs.readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
+      const fields = fs.readFileSync(mainThread ? `/proc/${pid}/task/${pid}/stat` : `/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
       ticks += Number(fields[11]) + Number(fields[12]); // utime, stime (fields 14 and 15 of stat)
       if (children) ticks += Number(fields[13]) + Number(fields[14]); // cutime, cstime
     } catch {
@@ -434,10 +450,14 @@ function postgresCpuMs(postmasterPidFile: string | null): number {
 
 /** CPU used by the API processes and PostgreSQL while `work` runs, per request it made. */
 async function withCpu(apiPids: number[], pgPidFile: string | null, work: () => Promise<Tally>): Promise<Tally> {
-  const before = { api: cpuMs(apiPids), pg: postgresCpuMs(pgPidFile) };
+  const before = { api: cpuMs(apiPids), loop: cpuMs(apiPids, false, true), pg: postgresCpuMs(pgPidFile) };
   const tally = await work();
   const n = Math.max(1, tally.count());
-  tally.cpu = { apiMsPerRequest: (cpuMs(apiPids) - before.api) / n, pgMsPerRequest: (postgresCpuMs(pgPidFile) - before.pg) / n };
+  tally.cpu = {
+    apiMsPerRequest: (cpuMs(apiPids) - before.api) / n,
+    eventLoopMsPerRequest: (cpuMs(apiPids, false, true) - before.loop) / n,
+    pgMsPerRequest: (postgresCpuMs(pgPidFile) - before.pg) / n,
+  };
   return tally;
 }
 
@@ -451,7 +471,7 @@ function printTally(title: string, tally: Tally, kinds: Kind[]): void {
   for (const k of kinds) if (tally.count(k)) row(k, k);
   if (kinds.length > 1) row('overall');
   log(`  socket errors ${tally.socketErrors}, timeouts ${tally.timeouts}`);
-  if (tally.cpu) log(`  CPU per request: API processes ${fmt(tally.cpu.apiMsPerRequest, 2)} ms, PostgreSQL ${fmt(tally.cpu.pgMsPerRequest, 2)} ms`);
+  if (tally.cpu) log(`  CPU per request: API processes ${fmt(tally.cpu.apiMsPerRequest, 2)} ms (main threads ${fmt(tally.cpu.eventLoopMsPerRequest, 2)} ms), PostgreSQL ${fmt(tally.cpu.pgMsPerRequest, 2)} ms`);
   for (const [kind, byStatus] of tally.failures) log(`  ${kind} non-2xx by status: ${[...byStatus].map(([s, n]) => `${s}: ${n}`).join(', ')}`);
   for (const [kind, list] of tally.samples) for (const s of list) log(`  ${kind} answered ${s}`);
 }
@@ -567,7 +587,7 @@ async function main(): Promise<void> {
       for (const { kind } of MIX.filter((m) => !args.kinds || args.kinds.includes(m.kind))) {
         const alone = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 1, connections: 8, durationS: args.quick ? 4 : 10, choose: () => kind, build }));
         failed += alone.failed() + alone.socketErrors + alone.timeouts;
-        log(`  ${kind.padEnd(10)} ${fmt(alone.count() / alone.seconds, 1).padStart(7)} req/s  p50 ${fmt(alone.percentile(50), 1).padStart(6)} ms  p99 ${fmt(alone.percentile(99), 1).padStart(6)} ms  CPU per request: API ${fmt(alone.cpu!.apiMsPerRequest, 2)} ms, PostgreSQL ${fmt(alone.cpu!.pgMsPerRequest, 2)} ms${alone.failed() ? `  non-2xx ${alone.failed()}` : ''}`);
+        log(`  ${kind.padEnd(10)} ${fmt(alone.count() / alone.seconds, 1).padStart(7)} req/s  p50 ${fmt(alone.percentile(50), 1).padStart(6)} ms  p99 ${fmt(alone.percentile(99), 1).padStart(6)} ms  CPU per request: API ${fmt(alone.cpu!.apiMsPerRequest, 2)} ms (main threads ${fmt(alone.cpu!.eventLoopMsPerRequest, 2)}), PostgreSQL ${fmt(alone.cpu!.pgMsPerRequest, 2)} ms${alone.failed() ? `  non-2xx ${alone.failed()}` : ''}`);
       }
     }
     if (args.kinds) {

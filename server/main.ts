@@ -9,6 +9,7 @@ import { createMailer, type OutgoingMail } from './mail/mailer';
 import { enqueueMail, startMailQueue, startMailWorker } from './mail/mail-queue';
 import { createPaymentClient } from './billing/payment-client';
 import { startCalibrationDueJob } from './instruments/calibration-due-job';
+import { closeHeavyPool } from './workers/heavy-pool';
 
 async function main() {
   const config = loadConfig();
@@ -51,6 +52,7 @@ async function main() {
     server.close();
     await boss.stop({ graceful: true, timeout: 5000 }).catch(() => undefined);
     await sequelize.close().catch(() => undefined);
+    await closeHeavyPool().catch(() => undefined);
     process.exit(0);
   };
   process.on('SIGTERM', () => void shutdown('SIGTERM'));

@@ -1,17 +1,17 @@
-import { hash, verify } from '@node-rs/argon2';
+import { runHeavy } from '../workers/heavy-pool';
 
-/** Argon2id with the library's defaults (m = 19 MiB, t = 2, p = 1: OWASP's minimum recommendation). */
+/**
+ * Argon2id with the library's defaults (m = 19 MiB, t = 2, p = 1: OWASP's minimum recommendation),
+ * in a worker thread of lower priority (server/workers/heavy-work.ts).
+ */
 export function hashPassword(password: string): Promise<string> {
-  return hash(password);
+  return runHeavy<string>({ kind: 'hash-password', password });
 }
 
+/** Whether `password` matches; false for no hash or a malformed one (a failed sign-in, never a 500). */
 export async function verifyPassword(passwordHash: string | null, password: string): Promise<boolean> {
   if (!passwordHash) return false;
-  try {
-    return await verify(passwordHash, password);
-  } catch {
-    return false; // a malformed stored hash is a failed sign-in, never a 500
-  }
+  return runHeavy<boolean>({ kind: 'verify-password', hash: passwordHash, password });
 }
 
 /** A fixed hash to verify against when the account does not exist, so timing does not reveal it. */

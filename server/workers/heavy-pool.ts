@@ -1,0 +1,50 @@
+/**
+ * Worker threads for heavy-work.ts, at a lower scheduling priority than the event loop. A
+ * sign-in's Argon2id (about 25 ms of CPU on purpose) or a trace CSV's parsing would otherwise
+ * compete on equal terms with every request's event loop and PostgreSQL: under load the few
+ * heavy requests set the latency of all the others (bench/load.ts measured it). Niced threads
+ * take the CPU the rest leaves; they still get it all when nothing else runs.
+ *
+ * The compiled server loads heavy-work.js; from TypeScript sources (tests, `npm run dev`) the
+ * workers load heavy-work.ts through tsx. Settings: HEAVY_WORK_THREADS (default: one per core),
+ * HEAVY_WORK_NICE (default 10; 0 turns it off; Linux only, elsewhere ignored).
+ */
+import os from 'node:os';
+import path from 'node:path';
+import { Piscina } from 'piscina';
+import type { HeavyTask } from './heavy-work';
+
+let pool: Piscina | undefined;
+
+function settingOr(name: string, fallback: number, min: number, max: number): number {
+  const raw = process.env[name];
+  if (raw === undefined || raw === '') return fallback;
+  const value = Number(raw);
+  if (!Number.isInteger(value) || value < min || value > max) throw new Error(`${name} must be a whole number from ${min} to ${max}, not "${raw}"`);
+  return value;
+}
+
+function createPool(): Piscina {
+  const compiled = path.extname(__filename) === '.js';
+  return new Piscina({
+    filename: path.join(__dirname, compiled ? 'heavy-work.js' : 'heavy-work.ts'),
+    ...(compiled ? {} : { execArgv: ['--require', require.resolve('tsx/cjs')] }),
+    minThreads: 1,
+    maxThreads: settingOr('HEAVY_WORK_THREADS', os.availableParallelism(), 1, 64),
+    niceIncrement: settingOr('HEAVY_WORK_NICE', 10, 0, 19),
+    idleTimeout: 60_000,
+  });
+}
+
+/** Runs `task` in the pool (made on first use) and answers its result. */
+export function runHeavy<T>(task: HeavyTask): Promise<T> {
+  pool ??= createPool();
+  return pool.run(task) as Promise<T>;
+}
+
+/** Ends the pool's threads (server shutdown, tests); the next task makes a new pool. */
+export async function closeHeavyPool(): Promise<void> {
+  const closing = pool;
+  pool = undefined;
+  await closing?.destroy();
+}
