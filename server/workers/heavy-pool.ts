@@ -6,8 +6,8 @@
  * take the CPU the rest leaves; they still get it all when nothing else runs.
  *
  * The compiled server loads heavy-work.js; from TypeScript sources (tests, `npm run dev`) the
- * workers load heavy-work.ts through tsx. Settings: HEAVY_WORK_THREADS (default: one per core),
- * HEAVY_WORK_NICE (default 10; 0 turns it off; Linux only, elsewhere ignored).
+ * workers load heavy-work.ts through tsx. Settings: SIDECHECK_HEAVY_WORK_THREADS (default: one per core),
+ * SIDECHECK_HEAVY_WORK_NICE (default 10; 0 turns it off; Linux only, elsewhere ignored).
  */
 import os from 'node:os';
 import path from 'node:path';
@@ -30,8 +30,8 @@ function createPool(): Piscina {
     filename: path.join(__dirname, compiled ? 'heavy-work.js' : 'heavy-work.ts'),
     ...(compiled ? {} : { execArgv: ['--require', require.resolve('tsx/cjs')] }),
     minThreads: 1,
-    maxThreads: settingOr('HEAVY_WORK_THREADS', os.availableParallelism(), 1, 64),
-    niceIncrement: settingOr('HEAVY_WORK_NICE', 10, 0, 19),
+    maxThreads: settingOr('SIDECHECK_HEAVY_WORK_THREADS', os.availableParallelism(), 1, 64),
+    niceIncrement: settingOr('SIDECHECK_HEAVY_WORK_NICE', 10, 0, 19),
     idleTimeout: 60_000,
   });
 }
