@@ -34,15 +34,15 @@ export async function asSystem<T>(sequelize: Sequelize, fn: (t: Transaction) => 
   return transactionFrom(sequelize, (t) => preparedRows(t, "SELECT set_config('app.system', 'on', true)", []), (t) => fn(t));
 }
 
+/** Sequelize's Transaction, with the members (undeclared in its types) that starting it here uses. */
+type OpenedHere = Transaction & { begin: () => Promise<unknown>; prepareEnvironment(useCls: boolean): Promise<unknown>; finished?: string };
+
 /**
  * sequelize.transaction(fn), with the transaction's first statement written together with its
  * START TRANSACTION (pipeline mode, db/sequelize.ts): one round trip where there were two. Model
  * queries inside join it through the request scope (db/request-scope.ts) as before. When `fn`'s
  * last statement already committed (preparedRows' `thenCommit`), there is nothing left to commit.
  */
-/** Sequelize's Transaction, with the members (undeclared in its types) that starting it here uses. */
-type OpenedHere = Transaction & { begin: () => Promise<unknown>; prepareEnvironment(useCls: boolean): Promise<unknown>; finished?: string };
-
 async function transactionFrom<S, T>(sequelize: Sequelize, first: (t: Transaction) => Promise<S>, fn: (t: Transaction, first: S) => Promise<T>): Promise<T> {
   const transaction = new Transaction(sequelize, {}) as OpenedHere;
   let firstDone: Promise<S> | undefined;
