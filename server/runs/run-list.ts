@@ -94,8 +94,15 @@ export async function listRuns(transaction: Transaction, organizationId: string,
     : matched || q.filter.engineerId
       ? `SELECT count(*) AS n FROM test_runs r WHERE ${where.join(' AND ')}`
       : `SELECT coalesce(sum(n), 0) AS n FROM run_state_counts WHERE organization_id = $1${stateIs ? ` AND ${stateIs}` : ''}`;
-  const limit = param(q.pageSize);
-  const offset = param((q.page - 1) * q.pageSize);
+  // The first page of an unfiltered list (the runs screen as it opens, the most frequent request)
+  // is a named statement with its page size written in (a whole number from 1 to 200,
+  // readListQuery): PostgreSQL then plans it once per connection and keeps that plan, where it
+  // used to spend longer planning the list than running it. With a filter or a later page, the
+  // statement is planned for its values each time (server/db/prepared-query.ts): the best plan
+  // for a rare state or a search differs from the one for the whole list, and page numbers are many.
+  const firstPlain = !matched && !stateIs && !q.filter.engineerId && q.page === 1;
+  const limit = firstPlain ? String(q.pageSize) : param(q.pageSize);
+  const offset = firstPlain ? '0' : param((q.page - 1) * q.pageSize);
   // The total is an uncorrelated subquery: PostgreSQL evaluates it once per statement (an InitPlan).
   // The page is joined to it, so a page past the end still answers one row, with the total: this
   // statement is always the request's last, and its COMMIT goes with it (server/db/prepared-query.ts).
@@ -109,9 +116,7 @@ export async function listRuns(transaction: Transaction, organizationId: string,
                     JOIN test_plans p ON p.organization_id = $1 AND p.id = r.plan_id
                     JOIN devices d ON d.organization_id = $1 AND d.id = p.device_id) x ON true
       ORDER BY x.${column} ${q.direction}, x.id ${q.direction}`;
-  // Planned for its values each time (server/db/prepared-query.ts): the best plan for a rare
-  // state or a search differs from the one for the whole list.
-  const rows = await preparedRows<(RunListItem & { total: string | null }) | { total: string | null; id: null }>(transaction, sql, values, { unnamed: true, thenCommit: true });
+  const rows = await preparedRows<(RunListItem & { total: string | null }) | { total: string | null; id: null }>(transaction, sql, values, { unnamed: !firstPlain, thenCommit: true });
   const known = rows[0].total === null ? matches : Number(rows[0].total);
   const items = rows.filter((row): row is RunListItem & { total: string | null } => row.id !== null).map(({ total: _total, ...item }) => item);
   return page(items, known, q);
