@@ -31,8 +31,8 @@
  *     begins, then waiting; --instances autocannon instances (default 10: 8 connections each at
  *     the target rate, 4 at half) have their seconds staggered evenly, so every 100 ms a group of
  *     requests arrives together. --instances 60 spreads the same rate over 60 instances of two
- *     connections, closer to a steady stream (on 2026-12-05 that gave lower medians but no lower
- *     p99 at 300 req/s: the tail there comes from the machine, not from the bursts).
+ *     connections, closer to a steady stream (README: with the heavy work in niced worker threads
+ *     it halves the p99 at 300 req/s; before, it lowered only the median).
  *  4. scale: sequential run-list requests in labs of 100, 1,000 and 10,000 runs.
  *  (--per-kind: before 2, each kind alone, closed loop, with the server CPU it costs per request.
  *   --kinds list,save: only those kinds alone, then stop; for profiling, LOAD_API_NODE_ARGS adds
@@ -554,7 +554,10 @@ async function main(): Promise<void> {
     };
     const fakes = startNode('stand-ins', ['dist/server/fakes/main.js'], { ...appEnv, PAYMENTS_WEBHOOK_URL: `http://127.0.0.1:${ports.api[0]}/api/billing/webhook` });
     processes.push(fakes);
-    for (const [i, port] of ports.api.entries()) processes.push(startNode(`api ${i + 1}`, [...(process.env.LOAD_API_NODE_ARGS?.split(' ').filter(Boolean) ?? []), 'dist/server/server/main.js'], { ...appEnv, PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${ports.api[0]}` }));
+    // The API processes start as scripts/start.sh starts one: with scripts/api-node-flags.
+    const apiFlags = fs.readFileSync(path.join(ROOT, 'scripts/api-node-flags'), 'utf8').split(/\s+/).filter(Boolean);
+    const extraFlags = process.env.LOAD_API_NODE_ARGS?.split(' ').filter(Boolean) ?? [];
+    for (const [i, port] of ports.api.entries()) processes.push(startNode(`api ${i + 1}`, [...apiFlags, ...extraFlags, 'dist/server/server/main.js'], { ...appEnv, PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${ports.api[0]}` }));
     for (const [i, port] of ports.bare.entries()) processes.push(startNode(`bare ${i + 1}`, [...process.execArgv, __filename, '--bare-server', String(port)], env));
     await waitForHttp(`http://127.0.0.1:${ports.smtpHttp}/`, fakes).catch(() => undefined);
     for (const [i, port] of ports.api.entries()) await waitForHttp(`http://127.0.0.1:${port}/api/health`, processes[1 + i]);

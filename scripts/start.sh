@@ -39,7 +39,9 @@ trap cleanup EXIT INT TERM
 
 node dist/server/fakes/main.js &
 pids+=($!)
-NODE_ENV="${NODE_ENV:-development}" node dist/server/server/main.js &
+# Node options of an API process (scripts/api-node-flags; DEVELOPERS.md, "Garbage collection").
+# shellcheck disable=SC2046
+NODE_ENV="${NODE_ENV:-development}" node $(cat scripts/api-node-flags) dist/server/server/main.js &
 pids+=($!)
 
 for _ in $(seq 1 60); do
