@@ -14,6 +14,8 @@ describe('toProblem for database failures', () => {
     // node-postgres' own words when the socket closes under a query (no SQLSTATE).
     ['the connection closed under a query', queryError('Connection terminated unexpectedly')],
     ['a query on a connection that already failed', queryError('Client has encountered a connection error and is not queryable')],
+    // A statement written (pipeline mode) to a socket the server has just closed: Node's EPIPE.
+    ['a statement written to a closed connection', queryError('write EPIPE', 'EPIPE')],
   ])('%s -> 503 with Retry-After', (_what, error) => {
     const problem = toProblem(error);
     expect(problem?.status).toBe(503);

@@ -2,7 +2,8 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { BaseError, ConnectionError, DatabaseError } from 'sequelize';
 import { Problem, badRequest, notFound, payloadTooLarge, serviceUnavailable } from './problem';
 
-const PG_CONNECTION_CODES = new Set(['57P01', '57P02', '57P03', '08000', '08003', '08006', '08001', '08004', 'ECONNREFUSED', 'ECONNRESET']);
+// EPIPE: a statement written to a connection the server has just closed (pipeline mode writes at once).
+const PG_CONNECTION_CODES = new Set(['57P01', '57P02', '57P03', '08000', '08003', '08006', '08001', '08004', 'ECONNREFUSED', 'ECONNRESET', 'EPIPE']);
 /**
  * What node-postgres says, without an SQLSTATE, when the server closed the connection under a
  * query (PostgreSQL shutting down or restarting): the request can be retried like a refused connection.
