@@ -19,7 +19,7 @@ const niceOfThreads = () =>
   fs.readdirSync('/proc/self/task').map((tid) => Number(fs.readFileSync(`/proc/self/task/${tid}/stat`, 'utf8').split(') ')[1].split(' ')[16]));
 
 describe('the heavy-work pool', () => {
-  it('hashes with Argon2id (RFC 9106 encoding, OWASP minimum parameters) and verifies in a worker', async () => {
+  it('hashes with Argon2id (RFC 9106) as a PHC string with OWASP’s minimum parameters, and verifies, in a worker', async () => {
     const hash = await hashPassword('correct horse 42');
     expect(hash).toMatch(/^\$argon2id\$v=19\$m=19456,t=2,p=1\$/);
     // Checked by the library on this thread as well: the worker's hash is an ordinary one.
