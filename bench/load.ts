@@ -88,7 +88,7 @@ interface AcInstance {
 const autocannon = require('autocannon') as (options: AcOptions, done: (error: Error | null, result: AcResult) => void) => AcInstance;
 
 // ---------------------------------------------------------------------------------------------
-interface Args { quick: boolean; durationS: number; rate: number; connections: number; instances: number; reuse: boolean; keepDb: boolean; perKind: boolean; kinds: string[] | null }
+interface Args { quick: boolean; durationS: number; rate: number; connections: number; instances: number; reuse: boolean; keepDb: boolean; perKind: boolean; kinds: string[] | null; weights: Record<string, number> }
 
 function readArgs(argv: string[]): Args {
   const value = (name: string) => {
@@ -106,7 +106,21 @@ function readArgs(argv: string[]): Args {
     keepDb: argv.includes('--keep-db'),
     perKind: argv.includes('--per-kind') || argv.includes('--kinds'),
     kinds: argv.includes('--kinds') ? argv[argv.indexOf('--kinds') + 1].split(',') : null,
+    weights: readWeights(argv),
   };
+}
+
+/** The mix's weights, unless `--weights upload=0,sign-in=0` changes some (to tell apart what each kind does to the others). */
+function readWeights(argv: string[]): Record<string, number> {
+  const weights: Record<string, number> = Object.fromEntries(MIX.map((m) => [m.kind, m.weight]));
+  const i = argv.indexOf('--weights');
+  if (i < 0) return weights;
+  for (const pair of (argv[i + 1] ?? '').split(',')) {
+    const [kind, weight] = pair.split('=');
+    if (!(kind in weights) || !(Number(weight) >= 0)) throw new Error(`--weights: "${pair}" is not kind=weight for a kind of the mix`);
+    weights[kind] = Number(weight);
+  }
+  return weights;
 }
 
 const log = (line: string) => console.log(line);
@@ -302,18 +316,8 @@ function requestFactory(labs: LabFixture[]) {
   };
 }
 
-/** The mix's weights, unless `--weights upload=0,sign-in=0` changes some (to tell apart what each kind does to the others). */
-const weights: Record<string, number> = Object.fromEntries(MIX.map((m) => [m.kind, m.weight]));
-const weightsArg = process.argv.indexOf('--weights');
-if (weightsArg > 0) {
-  for (const pair of (process.argv[weightsArg + 1] ?? '').split(',')) {
-    const [kind, weight] = pair.split('=');
-    if (!(kind in weights) || !(Number(weight) >= 0)) throw new Error(`--weights: "${pair}" is not kind=weight for a kind of the mix`);
-    weights[kind] = Number(weight);
-  }
-}
-
-function weightedKind(): Kind {
+/** A kind drawn at random by the mix's weights. */
+function weightedKind(weights: Record<string, number>): Kind {
   const total = MIX.reduce((s, m) => s + weights[m.kind], 0);
   let x = Math.random() * total;
   for (const m of MIX) {
@@ -583,7 +587,7 @@ async function main(): Promise<void> {
     failed += bare.failed() + bare.socketErrors + bare.timeouts;
 
     // Warm both API processes (connection pools, JIT) outside the figures.
-    await drive({ ports: ports.api, instancesPerPort: 1, connections: 4, durationS: 3, choose: weightedKind, build });
+    await drive({ ports: ports.api, instancesPerPort: 1, connections: 4, durationS: 3, choose: () => weightedKind(args.weights), build });
 
     if (args.perKind) {
       log('\neach kind alone, closed loop, 8 connections x 2 API processes');
@@ -600,7 +604,7 @@ async function main(): Promise<void> {
     }
 
     // 2. Capacity: the mix, closed loop.
-    const capacity = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 1, connections: args.connections, durationS: args.durationS, choose: weightedKind, build }));
+    const capacity = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 1, connections: args.connections, durationS: args.durationS, choose: () => weightedKind(args.weights), build }));
     printTally(`capacity: the mix, closed loop, ${args.connections} connections x 2 API processes, ${args.durationS} s`, capacity, MIX.map((m) => m.kind));
     failed += capacity.failed() + capacity.socketErrors + capacity.timeouts;
 
@@ -613,13 +617,13 @@ async function main(): Promise<void> {
     // 3. The target rate.
     const perPort = Math.max(1, Math.round(args.instances / ports.api.length));
     const spread = perPort * ports.api.length > 10;
-    const atRate = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 8, durationS: args.durationS, overallRate: args.rate, choose: weightedKind, build }));
+    const atRate = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 8, durationS: args.durationS, overallRate: args.rate, choose: () => weightedKind(args.weights), build }));
     printTally(`at the target rate: the mix at ${args.rate} req/s offered (${perPort * ports.api.length} autocannon instances x ${spread ? 2 : 8} connections), 2 API processes, ${args.durationS} s`, atRate, MIX.map((m) => m.kind));
     failed += atRate.failed() + atRate.socketErrors + atRate.timeouts;
 
     // 3b. Half the measured capacity: the latency when the machine is not saturated.
     const halfRate = Math.max(10, Math.round(capacity.count() / capacity.seconds / 2 / 10) * 10);
-    const atHalf = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 4, durationS: args.durationS, overallRate: halfRate, choose: weightedKind, build }));
+    const atHalf = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 4, durationS: args.durationS, overallRate: halfRate, choose: () => weightedKind(args.weights), build }));
     printTally(`at half the measured capacity: the mix at ${halfRate} req/s offered (${perPort * ports.api.length} instances x ${spread ? 2 : 4} connections), 2 API processes, ${args.durationS} s`, atHalf, MIX.map((m) => m.kind));
     failed += atHalf.failed() + atHalf.socketErrors + atHalf.timeouts;
 

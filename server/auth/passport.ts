@@ -1,9 +1,8 @@
-import crypto from 'node:crypto';
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { RequestHandler } from 'express';
 import type { Principal } from '../http/route';
-import { JWT_AUDIENCE, JWT_ISSUER } from './tokens';
+import { JWT_AUDIENCE, JWT_ISSUER, secretKeyOf } from './tokens';
 
 interface AccessClaims {
   sub: string;
@@ -19,9 +18,8 @@ export function configurePassport(secret: string): passport.PassportStatic {
     new JwtStrategy(
       {
         jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-        // A KeyObject, made once: given a string, jsonwebtoken first tries to parse it as a public key
-        // on every request and throws (about 1 ms per request at load; bench/load.ts).
-        secretOrKey: crypto.createSecretKey(Buffer.from(secret, 'utf8')) as unknown as string,
+        // A KeyObject, made once (auth/tokens.ts): given a string, jsonwebtoken parses it on every request.
+        secretOrKey: secretKeyOf(secret) as unknown as string,
         algorithms: ['HS256'],
         issuer: JWT_ISSUER,
         audience: JWT_AUDIENCE,

@@ -4,6 +4,7 @@
  */
 import path from 'node:path';
 import { projectRoot } from './project-root';
+import { wholeNumberSetting } from './whole-number-setting';
 
 export interface Config {
   env: 'development' | 'test' | 'production';
@@ -31,13 +32,7 @@ function required(name: string, fallback?: string): string {
   return value;
 }
 
-function integer(name: string, fallback: number): number {
-  const raw = process.env[name];
-  if (raw === undefined || raw === '') return fallback;
-  const value = Number(raw);
-  if (!Number.isInteger(value) || value < 0) throw new Error(`config: ${name} must be a whole number, got "${raw}"`);
-  return value;
-}
+const integer = (name: string, fallback: number): number => wholeNumberSetting(process.env, name, fallback, { min: 0 });
 
 export function loadConfig(): Config {
   const env = (process.env.NODE_ENV ?? 'development') as Config['env'];

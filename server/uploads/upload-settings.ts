@@ -5,6 +5,7 @@
  */
 import path from 'node:path';
 import { projectRoot } from '../config/project-root';
+import { wholeNumberSetting } from '../config/whole-number-setting';
 
 export interface UploadSettings {
   /** Root of the local file store (storage keys live below it). */
@@ -21,13 +22,7 @@ export interface UploadSettings {
 
 const MB = 1_000_000;
 
-function positiveInteger(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
-  const raw = env[name];
-  if (raw === undefined || raw === '') return fallback;
-  const value = Number(raw);
-  if (!Number.isSafeInteger(value) || value < 1) throw new Error(`config: ${name} must be a whole number above 0, got "${raw}"`);
-  return value;
-}
+const positiveInteger = (env: NodeJS.ProcessEnv, name: string, fallback: number): number => wholeNumberSetting(env, name, fallback, { min: 1 });
 
 /** @example uploadSettingsFromEnv({ SIDECHECK_UPLOAD_MAX_BYTES: '1000' }).maxFileBytes // 1000 */
 export function uploadSettingsFromEnv(env: NodeJS.ProcessEnv = process.env): UploadSettings {

@@ -12,17 +12,10 @@
 import os from 'node:os';
 import path from 'node:path';
 import { Piscina } from 'piscina';
+import { wholeNumberSetting } from '../config/whole-number-setting';
 import type { HeavyTask } from './heavy-work';
 
 let pool: Piscina | undefined;
-
-function settingOr(name: string, fallback: number, min: number, max: number): number {
-  const raw = process.env[name];
-  if (raw === undefined || raw === '') return fallback;
-  const value = Number(raw);
-  if (!Number.isInteger(value) || value < min || value > max) throw new Error(`${name} must be a whole number from ${min} to ${max}, not "${raw}"`);
-  return value;
-}
 
 function createPool(): Piscina {
   const compiled = path.extname(__filename) === '.js';
@@ -30,8 +23,8 @@ function createPool(): Piscina {
     filename: path.join(__dirname, compiled ? 'heavy-work.js' : 'heavy-work.ts'),
     ...(compiled ? {} : { execArgv: ['--require', require.resolve('tsx/cjs')] }),
     minThreads: 1,
-    maxThreads: settingOr('SIDECHECK_HEAVY_WORK_THREADS', os.availableParallelism(), 1, 64),
-    niceIncrement: settingOr('SIDECHECK_HEAVY_WORK_NICE', 10, 0, 19),
+    maxThreads: wholeNumberSetting(process.env, 'SIDECHECK_HEAVY_WORK_THREADS', os.availableParallelism(), { min: 1, max: 64 }),
+    niceIncrement: wholeNumberSetting(process.env, 'SIDECHECK_HEAVY_WORK_NICE', 10, { min: 0, max: 19 }),
     idleTimeout: 60_000,
   });
 }
