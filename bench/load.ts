@@ -8,7 +8,7 @@
  *   npm run bench:load -- --quick      (10 s phases)
  *   node node_modules/tsx/dist/cli.mjs bench/load.ts [--quick] [--duration 60] [--rate 300]
  *        [--connections 16] [--instances 10] [--reuse] [--keep-db] [--per-kind] [--kinds list,save]
- *        [--weights upload=0,sign-in=0]
+ *        [--weights upload=0,sign-in=0] [--rate-only]
  *
  * Works from a fresh clone after `npm run build` (or without it: when dist/server is missing the
  * server is compiled with tsc; the client is not needed, the API serves only /api here). Uses
@@ -36,7 +36,8 @@
  *  4. scale: sequential run-list requests in labs of 100, 1,000 and 10,000 runs.
  *  (--per-kind: before 2, each kind alone, closed loop, with the server CPU it costs per request.
  *   --kinds list,save: only those kinds alone, then stop; for profiling, LOAD_API_NODE_ARGS adds
- *   Node options to the API processes, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof".)
+ *   Node options to the API processes, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof".
+ *   --rate-only: only phase 3, then stop; to compare settings at the target rate.)
  * The mix, by count of requests: run lists with filters, sorts and pages 45 %, reading saves on
  * runs on the bench 25 %, run workspace (GET /runs/:id) 12 %, report PDF downloads 10 %, trace
  * CSV uploads 5 %, sign-ins 3 %. Requests alternate between the two API processes by instance
@@ -49,6 +50,7 @@
  */
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { createSequelize } from '../server/db/sequelize';
@@ -88,7 +90,7 @@ interface AcInstance {
 const autocannon = require('autocannon') as (options: AcOptions, done: (error: Error | null, result: AcResult) => void) => AcInstance;
 
 // ---------------------------------------------------------------------------------------------
-interface Args { quick: boolean; durationS: number; rate: number; connections: number; instances: number; reuse: boolean; keepDb: boolean; perKind: boolean; kinds: string[] | null; weights: Record<string, number> }
+interface Args { quick: boolean; durationS: number; rate: number; connections: number; instances: number; reuse: boolean; keepDb: boolean; perKind: boolean; kinds: string[] | null; weights: Record<string, number>; rateOnly: boolean }
 
 function readArgs(argv: string[]): Args {
   const value = (name: string) => {
@@ -107,6 +109,7 @@ function readArgs(argv: string[]): Args {
     perKind: argv.includes('--per-kind') || argv.includes('--kinds'),
     kinds: argv.includes('--kinds') ? argv[argv.indexOf('--kinds') + 1].split(',') : null,
     weights: readWeights(argv),
+    rateOnly: argv.includes('--rate-only'),
   };
 }
 
@@ -336,7 +339,7 @@ class Tally {
   socketErrors = 0;
   timeouts = 0;
   seconds = 0;
-  cpu: { apiMsPerRequest: number; eventLoopMsPerRequest: number; pgMsPerRequest: number } | null = null;
+  cpu: { apiMsPerRequest: number; eventLoopMsPerRequest: number; pgMsPerRequest: number; loadGeneratorCores: number } | null = null;
 
   record(kind: Kind, status: number, ms: number): void {
     if (!this.latencies.has(kind)) this.latencies.set(kind, []);
@@ -454,13 +457,16 @@ function postgresCpuMs(postmasterPidFile: string | null): number {
 
 /** CPU used by the API processes and PostgreSQL while `work` runs, per request it made. */
 async function withCpu(apiPids: number[], pgPidFile: string | null, work: () => Promise<Tally>): Promise<Tally> {
-  const before = { api: cpuMs(apiPids), loop: cpuMs(apiPids, false, true), pg: postgresCpuMs(pgPidFile) };
+  const before = { api: cpuMs(apiPids), loop: cpuMs(apiPids, false, true), pg: postgresCpuMs(pgPidFile), self: process.cpuUsage(), at: performance.now() };
   const tally = await work();
   const n = Math.max(1, tally.count());
+  const self = process.cpuUsage(before.self);
   tally.cpu = {
     apiMsPerRequest: (cpuMs(apiPids) - before.api) / n,
     eventLoopMsPerRequest: (cpuMs(apiPids, false, true) - before.loop) / n,
     pgMsPerRequest: (postgresCpuMs(pgPidFile) - before.pg) / n,
+    // This process (autocannon's clients) shares the machine's cores with what it measures.
+    loadGeneratorCores: (self.user + self.system) / 1000 / (performance.now() - before.at),
   };
   return tally;
 }
@@ -475,7 +481,7 @@ function printTally(title: string, tally: Tally, kinds: Kind[]): void {
   for (const k of kinds) if (tally.count(k)) row(k, k);
   if (kinds.length > 1) row('overall');
   log(`  socket errors ${tally.socketErrors}, timeouts ${tally.timeouts}`);
-  if (tally.cpu) log(`  CPU per request: API processes ${fmt(tally.cpu.apiMsPerRequest, 2)} ms (main threads ${fmt(tally.cpu.eventLoopMsPerRequest, 2)} ms), PostgreSQL ${fmt(tally.cpu.pgMsPerRequest, 2)} ms`);
+  if (tally.cpu) log(`  CPU per request: API processes ${fmt(tally.cpu.apiMsPerRequest, 2)} ms (main threads ${fmt(tally.cpu.eventLoopMsPerRequest, 2)} ms), PostgreSQL ${fmt(tally.cpu.pgMsPerRequest, 2)} ms; the load generator used ${fmt(tally.cpu.loadGeneratorCores, 2)} of the machine's ${os.cpus().length} cores`);
   for (const [kind, byStatus] of tally.failures) log(`  ${kind} non-2xx by status: ${[...byStatus].map(([s, n]) => `${s}: ${n}`).join(', ')}`);
   for (const [kind, list] of tally.samples) for (const s of list) log(`  ${kind} answered ${s}`);
 }
@@ -603,6 +609,21 @@ async function main(): Promise<void> {
       return;
     }
 
+    // 3. The target rate (measured first when it is the only phase wanted, --rate-only).
+    const perPort = Math.max(1, Math.round(args.instances / ports.api.length));
+    const spread = perPort * ports.api.length > 10;
+    const measureAtRate = async () => {
+      const tally = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 8, durationS: args.durationS, overallRate: args.rate, choose: () => weightedKind(args.weights), build }));
+      printTally(`at the target rate: the mix at ${args.rate} req/s offered (${perPort * ports.api.length} autocannon instances x ${spread ? 2 : 8} connections), 2 API processes, ${args.durationS} s`, tally, MIX.map((m) => m.kind));
+      failed += tally.failed() + tally.socketErrors + tally.timeouts;
+      return tally;
+    };
+    if (args.rateOnly) {
+      const tally = await measureAtRate();
+      log(`  p99 run lists / saves ${fmt(tally.percentile(99, 'list'), 1)} / ${fmt(tally.percentile(99, 'save'), 1)} ms | < ${TARGETS.listP99Ms} ms`);
+      return;
+    }
+
     // 2. Capacity: the mix, closed loop.
     const capacity = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 1, connections: args.connections, durationS: args.durationS, choose: () => weightedKind(args.weights), build }));
     printTally(`capacity: the mix, closed loop, ${args.connections} connections x 2 API processes, ${args.durationS} s`, capacity, MIX.map((m) => m.kind));
@@ -614,12 +635,7 @@ async function main(): Promise<void> {
     printTally(`run lists only, closed loop, ${args.connections} connections x 2 API processes, ${listS} s`, listOnly, ['list']);
     failed += listOnly.failed() + listOnly.socketErrors + listOnly.timeouts;
 
-    // 3. The target rate.
-    const perPort = Math.max(1, Math.round(args.instances / ports.api.length));
-    const spread = perPort * ports.api.length > 10;
-    const atRate = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 8, durationS: args.durationS, overallRate: args.rate, choose: () => weightedKind(args.weights), build }));
-    printTally(`at the target rate: the mix at ${args.rate} req/s offered (${perPort * ports.api.length} autocannon instances x ${spread ? 2 : 8} connections), 2 API processes, ${args.durationS} s`, atRate, MIX.map((m) => m.kind));
-    failed += atRate.failed() + atRate.socketErrors + atRate.timeouts;
+    const atRate = await measureAtRate();
 
     // 3b. Half the measured capacity: the latency when the machine is not saturated.
     const halfRate = Math.max(10, Math.round(capacity.count() / capacity.seconds / 2 / 10) * 10);

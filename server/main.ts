@@ -13,7 +13,7 @@ import { closeHeavyPool } from './workers/heavy-pool';
 
 async function main() {
   const config = loadConfig();
-  const sequelize = createSequelize(config.databaseUrl);
+  const sequelize = createSequelize(config.databaseUrl, { poolMax: config.databasePoolSize });
   initModels(sequelize);
   await sequelize.authenticate();
   const pending = await createMigrator(sequelize).pending();

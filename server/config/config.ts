@@ -12,6 +12,8 @@ export interface Config {
   host: string;
   publicUrl: string;
   databaseUrl: string;
+  /** Connections this process keeps to PostgreSQL at most (SIDECHECK_DB_POOL_SIZE). */
+  databasePoolSize: number;
   dataDir: string;
   jwtSecret: string;
   accessTokenTtlSeconds: number;
@@ -47,6 +49,12 @@ export function loadConfig(): Config {
     host: process.env.HOST ?? '127.0.0.1',
     publicUrl: process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`,
     databaseUrl: required('DATABASE_URL'),
+    // Few connections serve more: a request holds one only for its transaction's round trips, and
+    // PostgreSQL backends beyond about twice the cores only contend for them (PostgreSQL wiki,
+    // "Number Of Database Connections": (cores x 2) + spindles; from memory). On this 2-core
+    // machine two API processes with 5 each halved the p99 at 300 req/s against 20 each
+    // (bench/load.ts --rate-only, DEVELOPERS.md "Connections to PostgreSQL").
+    databasePoolSize: wholeNumberSetting(process.env, 'SIDECHECK_DB_POOL_SIZE', 5, { min: 1, max: 100 }),
     dataDir: process.env.SIDECHECK_DATA_DIR ?? path.join(root, '.data', 'files'),
     jwtSecret: required('JWT_SECRET', devSecret('jwt')),
     accessTokenTtlSeconds: integer('ACCESS_TOKEN_TTL_SECONDS', 600),

@@ -10,9 +10,10 @@ import { migration as certificates } from './migrations/0007-certificates';
 import { migration as calibrationNotices } from './migrations/0008-calibration-notices';
 import { migration as scaleOut } from './migrations/0009-scale-out';
 import { migration as runListKeys } from './migrations/0010-run-list-keys';
+import { migration as lz4Analysis } from './migrations/0011-lz4-analysis';
 
 /** Every migration, in order. Add a new file under migrations/ and append it here. */
-const MIGRATIONS = [foundation, accounts, equipment, billing, uploads, comments, certificates, calibrationNotices, scaleOut, runListKeys];
+const MIGRATIONS = [foundation, accounts, equipment, billing, uploads, comments, certificates, calibrationNotices, scaleOut, runListKeys, lz4Analysis];
 
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({

@@ -14,6 +14,8 @@ import { DatabaseError, type Transaction } from 'sequelize';
 
 interface PgConnection {
   query(config: { name?: string; text: string; values?: unknown[] }): Promise<{ rows: Record<string, unknown>[] }>;
+  /** node-postgres' wire connection; its socket can hold writes back (cork) and send them at once. */
+  connection?: { stream?: { cork?(): void; uncork?(): void } };
 }
 
 /** The parts of Sequelize's Transaction used to finish it here (see `thenCommit`). */
@@ -68,10 +70,10 @@ async function rowsOf<T>(query: Promise<{ rows: Record<string, unknown>[] }>, te
  */
 export async function preparedRows<T = Record<string, unknown>>(transaction: Transaction, text: string, values: unknown[], options: { unnamed?: boolean; thenCommit?: boolean } = {}): Promise<T[]> {
   const connection = connectionOf(transaction);
-  const rows = rowsOf<T>(connection.query(options.unnamed ? { text, values } : { name: nameOf(text), text, values }), text);
-  if (!options.thenCommit) return rows;
+  const written = () => rowsOf<T>(connection.query(options.unnamed ? { text, values } : { name: nameOf(text), text, values }), text);
+  if (!options.thenCommit) return written();
   const open = transaction as unknown as OpenTransaction;
-  const committed = rowsOf(connection.query({ text: 'COMMIT' }), 'COMMIT');
+  const [rows, committed] = writtenTogether(transaction, () => [written(), rowsOf(connection.query({ text: 'COMMIT' }), 'COMMIT')] as const);
   const [statement, commit] = await Promise.allSettled([rows, committed]);
   if (commit.status === 'rejected') {
     // The connection's state is unknown: destroyed rather than returned to the pool (as Sequelize does).
@@ -84,6 +86,22 @@ export async function preparedRows<T = Record<string, unknown>>(transaction: Tra
   if (statement.status === 'rejected') throw statement.reason;
   for (const hook of open._afterCommitHooks) await hook(transaction);
   return statement.value;
+}
+
+/**
+ * Runs `write`, whose statements node-postgres writes at once (pipeline mode), with the
+ * connection's socket corked: they leave in one write (one system call, and PostgreSQL wakes once
+ * to read them) rather than one each. Corking nests, so each statement's own cork inside
+ * node-postgres no longer sends it alone.
+ */
+export function writtenTogether<R>(transaction: Transaction, write: () => R): R {
+  const socket = connectionOf(transaction).connection?.stream;
+  socket?.cork?.();
+  try {
+    return write();
+  } finally {
+    socket?.uncork?.();
+  }
 }
 
 /** Writes `text` (no parameters) on the transaction's connection now; the promise settles with its answer. */

@@ -7,6 +7,7 @@
  * (protocol, "Pipelining" and "Extended Query": an error skips to the next Sync; COMMIT of a
  * failed transaction block answers ROLLBACK).
  */
+import net from 'node:net';
 import { DatabaseError, QueryTypes, type Transaction } from 'sequelize';
 import { startTestApp, type TestApp } from '../../test/support/test-app';
 import { buildLabScenario } from '../../test/support/factories';
@@ -87,5 +88,36 @@ describe('the pipelined tenant transaction', () => {
     // The test app's pool has 5 connections; every one is idle and usable again.
     const results = await Promise.all(Array.from({ length: 10 }, () => modelOf(lab.device.id)));
     expect(new Set(results).size).toBe(1);
+  });
+
+  it('sends START TRANSACTION with the first statement, and the last statement with its COMMIT, in one socket write each', async () => {
+    // Every write to any socket is noted with its socket; the transaction's own are picked out after.
+    type Write = { socket: net.Socket; messages: number };
+    const writes: Write[] = [];
+    const socket = net.Socket.prototype as unknown as Record<'_write' | '_writev', (this: net.Socket, ...args: unknown[]) => void>;
+    const original = { write: socket._write, writev: socket._writev };
+    socket._write = function (...args) {
+      writes.push({ socket: this, messages: 1 });
+      return original.write.apply(this, args);
+    };
+    socket._writev = function (...args) {
+      writes.push({ socket: this, messages: (args[0] as unknown[]).length });
+      return original.writev.apply(this, args);
+    };
+    let own: net.Socket | undefined;
+    try {
+      await inTenant(t.sequelize, lab.lab.id, async (transaction) => {
+        own = (transaction as unknown as { connection: { connection: { stream: net.Socket } } }).connection.connection.stream;
+        await preparedRows(transaction, 'SELECT model FROM devices WHERE id = $1', [lab.device.id], { thenCommit: true });
+      });
+    } finally {
+      socket._write = original.write;
+      socket._writev = original.writev;
+    }
+    const ownWrites = writes.filter((w) => w.socket === own).map((w) => w.messages);
+    // Two writes in all: START TRANSACTION + the tenant setup (Parse, Bind, Describe, Execute, Sync),
+    // then the statement + COMMIT. Written one by one they would have taken four.
+    expect(ownWrites).toHaveLength(2);
+    expect(Math.min(...ownWrites)).toBeGreaterThanOrEqual(2);
   });
 });

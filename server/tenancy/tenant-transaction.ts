@@ -6,7 +6,7 @@
  */
 import { Sequelize, Transaction } from 'sequelize';
 import type { Role } from '../../shared/access/roles';
-import { preparedRows, sendStatement } from '../db/prepared-query';
+import { preparedRows, sendStatement, writtenTogether } from '../db/prepared-query';
 
 export async function inTenant<T>(
   sequelize: Sequelize,
@@ -47,9 +47,12 @@ async function transactionFrom<S, T>(sequelize: Sequelize, first: (t: Transactio
   const transaction = new Transaction(sequelize, {}) as OpenedHere;
   let firstDone: Promise<S> | undefined;
   transaction.begin = async () => {
-    const begun = sendStatement(transaction, 'START TRANSACTION');
-    firstDone = first(transaction);
-    firstDone.catch(() => undefined); // answered below, once the transaction has begun
+    const begun = writtenTogether(transaction, () => {
+      const started = sendStatement(transaction, 'START TRANSACTION');
+      firstDone = first(transaction);
+      return started;
+    });
+    firstDone!.catch(() => undefined); // answered below, once the transaction has begun
     await begun;
   };
   const cls = Sequelize as unknown as { _clsRun<R>(fn: () => R): R };
