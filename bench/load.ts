@@ -8,7 +8,7 @@
  *   npm run bench:load -- --quick      (10 s phases)
  *   node node_modules/tsx/dist/cli.mjs bench/load.ts [--quick] [--duration 60] [--rate 300]
  *        [--connections 16] [--instances 10] [--reuse] [--keep-db] [--per-kind] [--kinds list,save]
- *        [--weights upload=0,sign-in=0] [--rate-only]
+ *        [--weights upload=0,sign-in=0] [--rate-only] [--timeline]
  *
  * Works from a fresh clone after `npm run build` (or without it: when dist/server is missing the
  * server is compiled with tsc; the client is not needed, the API serves only /api here). Uses
@@ -37,7 +37,8 @@
  *  (--per-kind: before 2, each kind alone, closed loop, with the server CPU it costs per request.
  *   --kinds list,save: only those kinds alone, then stop; for profiling, LOAD_API_NODE_ARGS adds
  *   Node options to the API processes, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof".
- *   --rate-only: only phase 3, then stop; to compare settings at the target rate.)
+ *   --rate-only: only phase 3, then stop; to compare settings at the target rate. --timeline: phase 3
+ *   also prints the p99 of lists and saves for each 5 s, to tell a steady tail from bursts.)
  * The mix, by count of requests: run lists with filters, sorts and pages 45 %, reading saves on
  * runs on the bench 25 %, run workspace (GET /runs/:id) 12 %, report PDF downloads 10 %, trace
  * CSV uploads 5 %, sign-ins 3 %. Requests alternate between the two API processes by instance
@@ -90,7 +91,7 @@ interface AcInstance {
 const autocannon = require('autocannon') as (options: AcOptions, done: (error: Error | null, result: AcResult) => void) => AcInstance;
 
 // ---------------------------------------------------------------------------------------------
-interface Args { quick: boolean; durationS: number; rate: number; connections: number; instances: number; reuse: boolean; keepDb: boolean; perKind: boolean; kinds: string[] | null; weights: Record<string, number>; rateOnly: boolean }
+interface Args { quick: boolean; durationS: number; rate: number; connections: number; instances: number; reuse: boolean; keepDb: boolean; perKind: boolean; kinds: string[] | null; weights: Record<string, number>; rateOnly: boolean; timeline: boolean }
 
 function readArgs(argv: string[]): Args {
   const value = (name: string) => {
@@ -110,6 +111,7 @@ function readArgs(argv: string[]): Args {
     kinds: argv.includes('--kinds') ? argv[argv.indexOf('--kinds') + 1].split(',') : null,
     weights: readWeights(argv),
     rateOnly: argv.includes('--rate-only'),
+    timeline: argv.includes('--timeline'),
   };
 }
 
@@ -340,10 +342,14 @@ class Tally {
   timeouts = 0;
   seconds = 0;
   cpu: { apiMsPerRequest: number; eventLoopMsPerRequest: number; pgMsPerRequest: number; loadGeneratorCores: number } | null = null;
+  /** When each run list and save was answered (ms since the phase began) with its latency, for --timeline. */
+  timeline: { atMs: number; ms: number }[] = [];
+  private readonly startedAt = performance.now();
 
   record(kind: Kind, status: number, ms: number): void {
     if (!this.latencies.has(kind)) this.latencies.set(kind, []);
     this.latencies.get(kind)!.push(ms);
+    if (kind === 'list' || kind === 'save') this.timeline.push({ atMs: performance.now() - this.startedAt, ms });
     if (status < 200 || status > 299) {
       const byStatus = this.failures.get(kind) ?? new Map<string, number>();
       byStatus.set(String(status), (byStatus.get(String(status)) ?? 0) + 1);
@@ -365,6 +371,19 @@ class Tally {
   failed(kind?: Kind): number {
     const kinds = kind ? [kind] : [...this.failures.keys()];
     return kinds.reduce((s, k) => s + [...(this.failures.get(k)?.values() ?? [])].reduce((a, b) => a + b, 0), 0);
+  }
+
+  /** The p99 of lists and saves in each `windowS`-second window: whether a tail is spread or comes in bursts. */
+  windows(windowS: number): { fromS: number; count: number; p99: number; max: number }[] {
+    const byWindow = new Map<number, number[]>();
+    for (const { atMs, ms } of this.timeline) {
+      const w = Math.floor(atMs / 1000 / windowS);
+      byWindow.set(w, [...(byWindow.get(w) ?? []), ms]);
+    }
+    return [...byWindow].sort((a, b) => a[0] - b[0]).map(([w, list]) => {
+      const sorted = list.sort((a, b) => a - b);
+      return { fromS: w * windowS, count: sorted.length, p99: sorted[Math.min(sorted.length - 1, Math.ceil(0.99 * sorted.length) - 1)], max: sorted[sorted.length - 1] };
+    });
   }
 
   percentile(p: number, kind?: Kind): number {
@@ -615,6 +634,7 @@ async function main(): Promise<void> {
     const measureAtRate = async () => {
       const tally = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 8, durationS: args.durationS, overallRate: args.rate, choose: () => weightedKind(args.weights), build }));
       printTally(`at the target rate: the mix at ${args.rate} req/s offered (${perPort * ports.api.length} autocannon instances x ${spread ? 2 : 8} connections), 2 API processes, ${args.durationS} s`, tally, MIX.map((m) => m.kind));
+      if (args.timeline) log(`  p99 / max of lists and saves by 5 s: ${tally.windows(5).map((w) => `${w.fromS}s ${fmt(w.p99, 0)}/${fmt(w.max, 0)}`).join(', ')} ms`);
       failed += tally.failed() + tally.socketErrors + tally.timeouts;
       return tally;
     };

@@ -10,7 +10,8 @@
  * address's. Two attempts racing at the limit may both be counted; the window tolerates that.
  */
 import crypto from 'node:crypto';
-import { QueryTypes, type Sequelize } from 'sequelize';
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { preparedRows } from '../db/prepared-query';
 import { tooManyRequests } from '../http/problem';
 
 export const SIGN_IN_WINDOW_SECONDS = 15 * 60;
@@ -21,27 +22,30 @@ const accountKey = (email: string) => `account:${email.trim().toLowerCase().slic
 const addressKey = (address: string) => `address:${address.slice(0, 100)}`;
 
 /**
- * Seconds until `key` drops below `limit` failures in the window, or 0 when it is below already.
- * The limit-th most recent failure is the one that must age out.
+ * Seconds until each key drops below its limit of failures in the window, or 0 when it is below
+ * already; both keys in one statement. For each, the limit-th most recent failure is the one that
+ * must age out.
  */
-async function secondsLocked(sequelize: Sequelize, key: string, limit: number): Promise<number> {
-  const rows = await sequelize.query<{ wait: string }>(
-    `SELECT ceil(extract(epoch FROM (failed_at + make_interval(secs => :window)) - now())) AS wait
-       FROM sign_in_failures WHERE key = :key AND failed_at > now() - make_interval(secs => :window)
-      ORDER BY failed_at DESC OFFSET :offset LIMIT 1`,
-    { replacements: { key, window: SIGN_IN_WINDOW_SECONDS, offset: limit - 1 }, type: QueryTypes.SELECT },
-  );
-  return rows.length ? Math.max(1, Number(rows[0].wait)) : 0;
+async function secondsLocked(sequelize: Sequelize, keys: { key: string; limit: number }[]): Promise<number[]> {
+  const wait = (i: number) => `(SELECT ceil(extract(epoch FROM (failed_at + make_interval(secs => :window)) - now()))
+       FROM sign_in_failures WHERE key = :key${i} AND failed_at > now() - make_interval(secs => :window)
+      ORDER BY failed_at DESC OFFSET :offset${i} LIMIT 1) AS wait${i}`;
+  const replacements: Record<string, string | number> = { window: SIGN_IN_WINDOW_SECONDS };
+  keys.forEach(({ key, limit }, i) => Object.assign(replacements, { [`key${i}`]: key, [`offset${i}`]: limit - 1 }));
+  const [row] = await sequelize.query<Record<string, string | null>>(`SELECT ${keys.map((_, i) => wait(i)).join(', ')}`, { replacements, type: QueryTypes.SELECT });
+  return keys.map((_, i) => (row[`wait${i}`] === null ? 0 : Math.max(1, Number(row[`wait${i}`]))));
 }
 
 /** Throw 429 with Retry-After when the account or the address has failed too often recently. */
 export async function refuseThrottledSignIn(sequelize: Sequelize, email: string, address: string): Promise<void> {
-  const account = await secondsLocked(sequelize, accountKey(email), ACCOUNT_FAILURE_LIMIT);
+  const [account, fromAddress] = await secondsLocked(sequelize, [
+    { key: accountKey(email), limit: ACCOUNT_FAILURE_LIMIT },
+    { key: addressKey(address), limit: ADDRESS_FAILURE_LIMIT },
+  ]);
   if (account > 0) {
     const minutes = Math.ceil(account / 60);
     throw tooManyRequests(`Too many failed sign-ins for this account. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`, account);
   }
-  const fromAddress = await secondsLocked(sequelize, addressKey(address), ADDRESS_FAILURE_LIMIT);
   if (fromAddress > 0) {
     const minutes = Math.ceil(fromAddress / 60);
     throw tooManyRequests(`Too many failed sign-ins from your network. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`, fromAddress);
@@ -64,4 +68,9 @@ export async function recordSignInFailure(sequelize: Sequelize, email: string, a
 /** Forget the account's failures after a successful sign-in or a password reset. */
 export async function clearAccountFailures(sequelize: Sequelize, email: string): Promise<void> {
   await sequelize.query('DELETE FROM sign_in_failures WHERE key = :key', { replacements: { key: accountKey(email) } });
+}
+
+/** clearAccountFailures as a statement written in `transaction` now (pipelined with others, auth/routes.ts). */
+export function clearAccountFailuresIn(transaction: Transaction, email: string): Promise<unknown> {
+  return preparedRows(transaction, 'DELETE FROM sign_in_failures WHERE key = $1', [accountKey(email)]);
 }

@@ -6,10 +6,11 @@
 import crypto from 'node:crypto';
 import jwt from 'jsonwebtoken';
 import type { Sequelize, Transaction } from 'sequelize';
-import { Op } from 'sequelize';
-import { Membership, Organization, RefreshToken, User } from '../db/models';
+import { Op, QueryTypes } from 'sequelize';
+import { RefreshToken, User } from '../db/models';
+import { preparedRows } from '../db/prepared-query';
 import type { Principal } from '../http/route';
-import type { Role } from '../../shared/access/roles';
+import { ROLES } from '../../shared/access/roles';
 import { unauthorized } from '../http/problem';
 
 export interface TokenSettings {
@@ -21,26 +22,45 @@ export interface TokenSettings {
 export const JWT_ISSUER = 'sidecheck';
 export const JWT_AUDIENCE = 'sidecheck-api';
 
-export async function loadPrincipal(userId: string, transaction?: Transaction): Promise<Principal | null> {
-  const user = await User.findByPk(userId, { transaction });
-  if (!user) return null;
-  const memberships = await Membership.findAll({ where: { userId }, transaction });
-  const orgIds = [...new Set(memberships.map((m) => m.organizationId))];
-  const orgs = await Organization.findAll({ where: { id: orgIds }, transaction });
+/**
+ * The person with each organization they belong to (by name) and their roles there (in the order
+ * of ROLES), in one statement: users, memberships and organizations have no row-level security.
+ */
+const PRINCIPAL = `
+SELECT u.id, u.email, u.display_name AS "displayName",
+       coalesce((SELECT json_agg(json_build_object('organizationId', o.id, 'organizationName', o.name, 'kind', o.kind,
+                                                   'roles', (SELECT json_agg(m.role) FROM memberships m WHERE m.user_id = u.id AND m.organization_id = o.id)))
+                   FROM organizations o WHERE o.id IN (SELECT organization_id FROM memberships WHERE user_id = u.id)), '[]'::json) AS memberships
+  FROM users u WHERE u.id = $1::uuid`;
+
+type PrincipalRow = { id: string; email: string; displayName: string; memberships: (Principal['memberships'][number] & { organizationName: string })[] };
+
+function principalOf(row: PrincipalRow | undefined): Principal | null {
+  if (!row) return null;
   return {
-    userId: user.id,
-    email: user.email,
-    displayName: user.displayName,
-    memberships: orgs
-      .sort((a, b) => a.name.localeCompare(b.name))
-      .map((org) => ({
-        organizationId: org.id,
-        // The name lets the client's organization switcher show names instead of ids.
-        organizationName: org.name,
-        kind: org.kind,
-        roles: memberships.filter((m) => m.organizationId === org.id).map((m) => m.role as Role),
-      })),
+    userId: row.id,
+    email: row.email,
+    displayName: row.displayName,
+    memberships: row.memberships
+      // The name lets the client's organization switcher show names instead of ids.
+      .sort((a, b) => a.organizationName.localeCompare(b.organizationName))
+      .map((m) => ({ ...m, roles: m.roles.slice().sort((a, b) => ROLES.indexOf(a) - ROLES.indexOf(b)) })),
   };
+}
+
+export async function loadPrincipal(userId: string, transaction?: Transaction): Promise<Principal | null> {
+  const rows = transaction
+    ? await preparedRows<PrincipalRow>(transaction, PRINCIPAL, [userId])
+    : await User.sequelize!.query<PrincipalRow>(PRINCIPAL, { bind: [userId], type: QueryTypes.SELECT });
+  return principalOf(rows[0]);
+}
+
+/**
+ * Writes the principal's statement in `transaction` now, as its last, with the COMMIT behind it
+ * (prepared-query.ts `thenCommit`); the promise settles with the principal.
+ */
+export function loadPrincipalThenCommit(transaction: Transaction, userId: string): Promise<Principal | null> {
+  return preparedRows<PrincipalRow>(transaction, PRINCIPAL, [userId], { thenCommit: true }).then((rows) => principalOf(rows[0]));
 }
 
 /**
@@ -74,6 +94,18 @@ export async function issueRefreshToken(userId: string, settings: TokenSettings,
     { transaction },
   );
   return token;
+}
+
+/** issueRefreshToken as one statement written in `transaction` now: the token, and the promise of its row. */
+export function writeRefreshToken(transaction: Transaction, userId: string, settings: TokenSettings): { token: string; written: Promise<unknown> } {
+  const token = crypto.randomBytes(32).toString('base64url');
+  const written = preparedRows(transaction, 'INSERT INTO refresh_tokens (user_id, family_id, token_hash, expires_at) VALUES ($1::uuid, $2::uuid, $3::text, $4::timestamptz)', [
+    userId,
+    crypto.randomUUID(),
+    hashToken(token),
+    new Date(Date.now() + settings.refreshTtlSeconds * 1000),
+  ]);
+  return { token, written };
 }
 
 /** Exchange a refresh token for a new one; reuse of a rotated token revokes the family. */

@@ -101,6 +101,14 @@ describe('an emission-mask trace', () => {
     expect(maskCase.traceResult).toMatchObject({ id: u.result.id, uploadId: u.id, verdict: 'pass' });
     const [row] = await system<{ upload_id: string; reading_id: string | null }>('SELECT upload_id, reading_id FROM results WHERE id = :id', { id: u.result.id });
     expect(row).toEqual({ upload_id: u.id, reading_id: null });
+    // The analysis (tens of kilobytes of JSON) is stored compressed with LZ4 (migration 0011) and reads back whole.
+    const [stored] = await system<{ method: string; stored_bytes: number; text_bytes: number }>(
+      'SELECT pg_column_compression(analysis) AS method, pg_column_size(analysis) AS stored_bytes, octet_length(analysis::text) AS text_bytes FROM uploads WHERE id = :id',
+      { id: u.id },
+    );
+    expect(stored.method).toBe('lz4');
+    expect(stored.stored_bytes).toBeLessThan(stored.text_bytes / 2);
+    expect(detail.body.analysis).toEqual(u.analysis);
   });
 
   it('the uploaded file is a technical record: the database refuses to change or delete it', async () => {
