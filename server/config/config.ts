@@ -52,7 +52,7 @@ export function loadConfig(): Config {
     // Few connections serve more: a request holds one only for its transaction's round trips, and
     // PostgreSQL backends beyond about twice the cores only contend for them (PostgreSQL wiki,
     // "Number Of Database Connections": (cores x 2) + spindles; from memory). On this 2-core
-    // machine two API processes with 5 each halved the p99 at 300 req/s against 20 each
+    // machine two API processes with 5 each cut the p99 at 300 req/s to a quarter of that with 20 each
     // (bench/load.ts --rate-only, DEVELOPERS.md "Connections to PostgreSQL").
     databasePoolSize: wholeNumberSetting(process.env, 'SIDECHECK_DB_POOL_SIZE', 5, { min: 1, max: 100 }),
     dataDir: process.env.SIDECHECK_DATA_DIR ?? path.join(root, '.data', 'files'),
