@@ -378,12 +378,19 @@ class Tally {
     const byWindow = new Map<number, number[]>();
     for (const { atMs, ms } of this.timeline) {
       const w = Math.floor(atMs / 1000 / windowS);
-      byWindow.set(w, [...(byWindow.get(w) ?? []), ms]);
+      const list = byWindow.get(w);
+      if (list) list.push(ms);
+      else byWindow.set(w, [ms]);
     }
     return [...byWindow].sort((a, b) => a[0] - b[0]).map(([w, list]) => {
       const sorted = list.sort((a, b) => a - b);
       return { fromS: w * windowS, count: sorted.length, p99: sorted[Math.min(sorted.length - 1, Math.ceil(0.99 * sorted.length) - 1)], max: sorted[sorted.length - 1] };
     });
+  }
+
+  /** Requests that failed: non-2xx answers, socket errors and timeouts. */
+  problems(): number {
+    return this.failed() + this.socketErrors + this.timeouts;
   }
 
   percentile(p: number, kind?: Kind): number {
@@ -609,16 +616,17 @@ async function main(): Promise<void> {
       build: () => ({ method: 'GET', path: `/runs/${pick(runIds)}` }),
     }));
     printTally(`bare Express + pg primary-key endpoint, closed loop, ${args.connections} connections x 2 processes, ${bareS} s`, bare, ['bare']);
-    failed += bare.failed() + bare.socketErrors + bare.timeouts;
+    failed += bare.problems();
 
+    const mixed = () => weightedKind(args.weights);
     // Warm both API processes (connection pools, JIT) outside the figures.
-    await drive({ ports: ports.api, instancesPerPort: 1, connections: 4, durationS: 3, choose: () => weightedKind(args.weights), build });
+    await drive({ ports: ports.api, instancesPerPort: 1, connections: 4, durationS: 3, choose: mixed, build });
 
     if (args.perKind) {
       log('\neach kind alone, closed loop, 8 connections x 2 API processes');
       for (const { kind } of MIX.filter((m) => !args.kinds || args.kinds.includes(m.kind))) {
         const alone = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 1, connections: 8, durationS: args.quick ? 4 : 10, choose: () => kind, build }));
-        failed += alone.failed() + alone.socketErrors + alone.timeouts;
+        failed += alone.problems();
         log(`  ${kind.padEnd(10)} ${fmt(alone.count() / alone.seconds, 1).padStart(7)} req/s  p50 ${fmt(alone.percentile(50), 1).padStart(6)} ms  p99 ${fmt(alone.percentile(99), 1).padStart(6)} ms  CPU per request: API ${fmt(alone.cpu!.apiMsPerRequest, 2)} ms (main threads ${fmt(alone.cpu!.eventLoopMsPerRequest, 2)}), PostgreSQL ${fmt(alone.cpu!.pgMsPerRequest, 2)} ms${alone.failed() ? `  non-2xx ${alone.failed()}` : ''}`);
       }
     }
@@ -632,36 +640,37 @@ async function main(): Promise<void> {
     const perPort = Math.max(1, Math.round(args.instances / ports.api.length));
     const spread = perPort * ports.api.length > 10;
     const measureAtRate = async () => {
-      const tally = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 8, durationS: args.durationS, overallRate: args.rate, choose: () => weightedKind(args.weights), build }));
+      const tally = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 8, durationS: args.durationS, overallRate: args.rate, choose: mixed, build }));
       printTally(`at the target rate: the mix at ${args.rate} req/s offered (${perPort * ports.api.length} autocannon instances x ${spread ? 2 : 8} connections), 2 API processes, ${args.durationS} s`, tally, MIX.map((m) => m.kind));
       if (args.timeline) log(`  p99 / max of lists and saves by 5 s: ${tally.windows(5).map((w) => `${w.fromS}s ${fmt(w.p99, 0)}/${fmt(w.max, 0)}`).join(', ')} ms`);
-      failed += tally.failed() + tally.socketErrors + tally.timeouts;
+      failed += tally.problems();
       return tally;
     };
     if (args.rateOnly) {
       const tally = await measureAtRate();
       log(`  p99 run lists / saves ${fmt(tally.percentile(99, 'list'), 1)} / ${fmt(tally.percentile(99, 'save'), 1)} ms | < ${TARGETS.listP99Ms} ms`);
+      if (failed > 0) process.exitCode = 1;
       return;
     }
 
     // 2. Capacity: the mix, closed loop.
-    const capacity = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 1, connections: args.connections, durationS: args.durationS, choose: () => weightedKind(args.weights), build }));
+    const capacity = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 1, connections: args.connections, durationS: args.durationS, choose: mixed, build }));
     printTally(`capacity: the mix, closed loop, ${args.connections} connections x 2 API processes, ${args.durationS} s`, capacity, MIX.map((m) => m.kind));
-    failed += capacity.failed() + capacity.socketErrors + capacity.timeouts;
+    failed += capacity.problems();
 
     // List-only capacity, the like-for-like comparison with the bare endpoint.
     const listS = args.quick ? 5 : 15;
     const listOnly = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: 1, connections: args.connections, durationS: listS, choose: () => 'list', build }));
     printTally(`run lists only, closed loop, ${args.connections} connections x 2 API processes, ${listS} s`, listOnly, ['list']);
-    failed += listOnly.failed() + listOnly.socketErrors + listOnly.timeouts;
+    failed += listOnly.problems();
 
     const atRate = await measureAtRate();
 
     // 3b. Half the measured capacity: the latency when the machine is not saturated.
     const halfRate = Math.max(10, Math.round(capacity.count() / capacity.seconds / 2 / 10) * 10);
-    const atHalf = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 4, durationS: args.durationS, overallRate: halfRate, choose: () => weightedKind(args.weights), build }));
+    const atHalf = await withCpu(apiPids, db.postmasterPidFile, () => drive({ ports: ports.api, instancesPerPort: perPort, connections: spread ? 2 : 4, durationS: args.durationS, overallRate: halfRate, choose: mixed, build }));
     printTally(`at half the measured capacity: the mix at ${halfRate} req/s offered (${perPort * ports.api.length} instances x ${spread ? 2 : 4} connections), 2 API processes, ${args.durationS} s`, atHalf, MIX.map((m) => m.kind));
-    failed += atHalf.failed() + atHalf.socketErrors + atHalf.timeouts;
+    failed += atHalf.problems();
 
     // 4. Scale: list latency by lab size, one request at a time.
     const scale: { runs: number; first: { p50: number; p99: number }; byClient: { p50: number; p99: number } }[] = [];
@@ -690,7 +699,7 @@ async function main(): Promise<void> {
     log(`  the mix as a fraction of the bare endpoint     ${fmt(capRps / bareRps, 2)} | >= ${TARGETS.bareFraction}`);
     log(`  run lists as a fraction of the bare endpoint   ${fmt(listRps / bareRps, 2)} | >= ${TARGETS.bareFraction}`);
     log(`  server CPU per request (API + PostgreSQL): bare ${fmt(bare.cpu!.apiMsPerRequest + bare.cpu!.pgMsPerRequest, 2)} ms, the mix ${fmt(capacity.cpu!.apiMsPerRequest + capacity.cpu!.pgMsPerRequest, 2)} ms, run lists ${fmt(listOnly.cpu!.apiMsPerRequest + listOnly.cpu!.pgMsPerRequest, 2)} ms`);
-    log(`  load average when done: ${fs.readFileSync('/proc/loadavg', 'utf8').split(' ').slice(0, 3).join(' ')} on ${require('node:os').cpus().length} cores (other work on the machine slows every figure)`);
+    log(`  load average when done: ${fs.readFileSync('/proc/loadavg', 'utf8').split(' ').slice(0, 3).join(' ')} on ${os.cpus().length} cores (other work on the machine slows every figure)`);
     log(
       'JSON ' +
         JSON.stringify({

@@ -22,26 +22,28 @@ const accountKey = (email: string) => `account:${email.trim().toLowerCase().slic
 const addressKey = (address: string) => `address:${address.slice(0, 100)}`;
 
 /**
- * Seconds until each key drops below its limit of failures in the window, or 0 when it is below
- * already; both keys in one statement. For each, the limit-th most recent failure is the one that
- * must age out.
+ * Seconds until the account and the address each drop below their limit of failures in the
+ * window, or null when below already: for each, the limit-th most recent failure is the one that
+ * must age out. Both in one statement.
  */
-async function secondsLocked(sequelize: Sequelize, keys: { key: string; limit: number }[]): Promise<number[]> {
-  const wait = (i: number) => `(SELECT ceil(extract(epoch FROM (failed_at + make_interval(secs => :window)) - now()))
-       FROM sign_in_failures WHERE key = :key${i} AND failed_at > now() - make_interval(secs => :window)
-      ORDER BY failed_at DESC OFFSET :offset${i} LIMIT 1) AS wait${i}`;
-  const replacements: Record<string, string | number> = { window: SIGN_IN_WINDOW_SECONDS };
-  keys.forEach(({ key, limit }, i) => Object.assign(replacements, { [`key${i}`]: key, [`offset${i}`]: limit - 1 }));
-  const [row] = await sequelize.query<Record<string, string | null>>(`SELECT ${keys.map((_, i) => wait(i)).join(', ')}`, { replacements, type: QueryTypes.SELECT });
-  return keys.map((_, i) => (row[`wait${i}`] === null ? 0 : Math.max(1, Number(row[`wait${i}`]))));
-}
+const SECONDS_LOCKED = `SELECT ${['account', 'address']
+  .map(
+    (who) => `(SELECT ceil(extract(epoch FROM (failed_at + make_interval(secs => :window)) - now()))
+       FROM sign_in_failures WHERE key = :${who}Key AND failed_at > now() - make_interval(secs => :window)
+      ORDER BY failed_at DESC OFFSET :${who}Offset LIMIT 1) AS ${who}`,
+  )
+  .join(',\n')}`;
+
+const waitSeconds = (wait: string | null) => (wait === null ? 0 : Math.max(1, Number(wait)));
 
 /** Throw 429 with Retry-After when the account or the address has failed too often recently. */
 export async function refuseThrottledSignIn(sequelize: Sequelize, email: string, address: string): Promise<void> {
-  const [account, fromAddress] = await secondsLocked(sequelize, [
-    { key: accountKey(email), limit: ACCOUNT_FAILURE_LIMIT },
-    { key: addressKey(address), limit: ADDRESS_FAILURE_LIMIT },
-  ]);
+  const [locked] = await sequelize.query<{ account: string | null; address: string | null }>(SECONDS_LOCKED, {
+    replacements: { window: SIGN_IN_WINDOW_SECONDS, accountKey: accountKey(email), accountOffset: ACCOUNT_FAILURE_LIMIT - 1, addressKey: addressKey(address), addressOffset: ADDRESS_FAILURE_LIMIT - 1 },
+    type: QueryTypes.SELECT,
+  });
+  const account = waitSeconds(locked.account);
+  const fromAddress = waitSeconds(locked.address);
   if (account > 0) {
     const minutes = Math.ceil(account / 60);
     throw tooManyRequests(`Too many failed sign-ins for this account. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`, account);
@@ -65,12 +67,14 @@ export async function recordSignInFailure(sequelize: Sequelize, email: string, a
   }
 }
 
+const CLEAR_ACCOUNT_FAILURES = 'DELETE FROM sign_in_failures WHERE key = $1';
+
 /** Forget the account's failures after a successful sign-in or a password reset. */
 export async function clearAccountFailures(sequelize: Sequelize, email: string): Promise<void> {
-  await sequelize.query('DELETE FROM sign_in_failures WHERE key = :key', { replacements: { key: accountKey(email) } });
+  await sequelize.query(CLEAR_ACCOUNT_FAILURES, { bind: [accountKey(email)] });
 }
 
 /** clearAccountFailures as a statement written in `transaction` now (pipelined with others, auth/routes.ts). */
 export function clearAccountFailuresIn(transaction: Transaction, email: string): Promise<unknown> {
-  return preparedRows(transaction, 'DELETE FROM sign_in_failures WHERE key = $1', [accountKey(email)]);
+  return preparedRows(transaction, CLEAR_ACCOUNT_FAILURES, [accountKey(email)]);
 }

@@ -1,5 +1,7 @@
 import request from 'supertest';
 import jwt from 'jsonwebtoken';
+import { QueryTypes } from 'sequelize';
+import { asSystem } from '../tenancy/tenant-transaction';
 import { startTestApp, TEST_JWT_SECRET, type TestApp } from '../../test/support/test-app';
 import { buildOrganization, buildUser, signIn, TEST_PASSWORD } from '../../test/support/factories';
 
@@ -25,6 +27,12 @@ describe('sign-in', () => {
     expect(setCookie).toMatch(/HttpOnly/);
     expect(setCookie).toMatch(/SameSite=Strict/);
     expect(setCookie).toMatch(/Path=\/api\/auth/);
+    // The audit entry is written in the same transaction as the refresh token (auth/routes.ts), before its COMMIT.
+    const audit = await asSystem(t.sequelize, (transaction) =>
+      t.sequelize.query<{ action: string; entity_id: string; after: { email: string } }>("SELECT action, entity_id, after FROM audit_log WHERE user_id = :id AND action LIKE 'sign-in%'", { replacements: { id: user.id }, type: QueryTypes.SELECT, transaction }),
+    );
+    expect(audit).toEqual([{ action: 'sign-in', entity_id: user.id, after: { email: user.email.toUpperCase() } }]);
+    expect((await refreshWith(cookieOf(res))).status).toBe(200);
   });
 
   it('answers a wrong password and an unknown account the same way, as problem+json', async () => {

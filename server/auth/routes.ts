@@ -7,9 +7,10 @@ import { signInSchema, type SignInBody } from '../../shared/schemas/auth';
 import { asSystem } from '../tenancy/tenant-transaction';
 import { AuditEntry } from '../db/models';
 import { DUMMY_HASH, verifyPassword } from './password';
-import { issueRefreshToken, loadPrincipal, loadPrincipalThenCommit, revokeAllRefreshTokens, revokeRefreshToken, rotateRefreshToken, signAccessToken, writeRefreshToken, type TokenSettings } from './tokens';
+import { issueRefreshToken, loadPrincipal, revokeAllRefreshTokens, revokeRefreshToken, rotateRefreshToken, signAccessToken, writeRefreshToken, type TokenSettings } from './tokens';
 import { clearAccountFailuresIn, recordSignInFailure, refuseThrottledSignIn } from '../accounts/sign-in-limiter';
-import { preparedRows, writtenTogether } from '../db/prepared-query';
+import { allAnswered, preparedRows, writtenTogether } from '../db/prepared-query';
+import type { Principal } from '../http/route';
 
 export const REFRESH_COOKIE = 'sidecheck_refresh';
 
@@ -39,10 +40,15 @@ function readRefreshCookie(req: Request): string | null {
 
 const AUDIT_SIGN_IN = `INSERT INTO audit_log (organization_id, user_id, action, entity, entity_id, after) VALUES (NULL, $1::uuid, 'sign-in', 'user', $1::text, $2::jsonb)`;
 
+/** What sign-in, refresh and sign-up answer: the access token, its lifetime, the person. */
+function sessionAnswer(principal: Principal, deps: SessionDeps) {
+  return { accessToken: signAccessToken(principal, deps.tokens), expiresIn: deps.tokens.accessTtlSeconds, user: principal };
+}
+
 async function session(userId: string, deps: SessionDeps) {
   const principal = await loadPrincipal(userId);
   if (!principal) throw unauthorized();
-  return { accessToken: signAccessToken(principal, deps.tokens), expiresIn: deps.tokens.accessTtlSeconds, user: principal };
+  return sessionAnswer(principal, deps);
 }
 
 /** Set a new refresh cookie for the user and answer like sign-in: access token, lifetime, the person. */
@@ -77,28 +83,20 @@ export function authRoutes(deps: AuthDeps): RouteDef[] {
         // person with their organizations, in one transaction whose statements leave together
         // (pipeline mode, db/prepared-query.ts): one round trip after START, where there were eight.
         const { refreshToken, principal } = await asSystem(deps.sequelize, async (t) => {
-          const [statements, refresh] = writtenTogether(t, () => {
+          // Written in this order: the person's statement takes the COMMIT behind it, so it goes last.
+          const [refresh, answers] = writtenTogether(t, () => {
+            const audit = preparedRows(t, AUDIT_SIGN_IN, [user.id, JSON.stringify(audited)]);
+            const cleared = clearAccountFailuresIn(t, ctx.body.email);
             const refresh = writeRefreshToken(t, user.id, deps.tokens);
-            return [
-              [
-                preparedRows(t, AUDIT_SIGN_IN, [user.id, JSON.stringify(audited)]),
-                clearAccountFailuresIn(t, ctx.body.email),
-                refresh.written,
-                loadPrincipalThenCommit(t, user.id),
-              ] as const,
-              refresh,
-            ] as const;
+            const person = loadPrincipal(user.id, t, { thenCommit: true });
+            return [refresh, allAnswered([audit, cleared, refresh.written, person] as const)] as const;
           });
-          // Every answer is awaited before the transaction is left, the first failure thrown.
-          const settled = await Promise.allSettled(statements);
-          const failed = settled.find((r): r is PromiseRejectedResult => r.status === 'rejected');
-          if (failed) throw failed.reason;
-          return { refreshToken: refresh.token, principal: await statements[3] };
+          return { refreshToken: refresh.token, principal: (await answers)[3] };
         });
         if (!principal) throw unauthorized();
         setRefreshCookie(ctx.res, refreshToken, deps);
         ctx.status(200);
-        return { accessToken: signAccessToken(principal, deps.tokens), expiresIn: deps.tokens.accessTtlSeconds, user: principal };
+        return sessionAnswer(principal, deps);
       },
     }),
     route({

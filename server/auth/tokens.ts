@@ -48,19 +48,16 @@ function principalOf(row: PrincipalRow | undefined): Principal | null {
   };
 }
 
-export async function loadPrincipal(userId: string, transaction?: Transaction): Promise<Principal | null> {
+/**
+ * The person with their organizations and roles, or null. In `transaction` when given (as a
+ * prepared statement, written at once: `thenCommit` makes it the transaction's last, see
+ * db/prepared-query.ts), else on its own.
+ */
+export async function loadPrincipal(userId: string, transaction?: Transaction, options: { thenCommit?: boolean } = {}): Promise<Principal | null> {
   const rows = transaction
-    ? await preparedRows<PrincipalRow>(transaction, PRINCIPAL, [userId])
+    ? await preparedRows<PrincipalRow>(transaction, PRINCIPAL, [userId], options)
     : await User.sequelize!.query<PrincipalRow>(PRINCIPAL, { bind: [userId], type: QueryTypes.SELECT });
   return principalOf(rows[0]);
-}
-
-/**
- * Writes the principal's statement in `transaction` now, as its last, with the COMMIT behind it
- * (prepared-query.ts `thenCommit`); the promise settles with the principal.
- */
-export function loadPrincipalThenCommit(transaction: Transaction, userId: string): Promise<Principal | null> {
-  return preparedRows<PrincipalRow>(transaction, PRINCIPAL, [userId], { thenCommit: true }).then((rows) => principalOf(rows[0]));
 }
 
 /**
@@ -87,23 +84,26 @@ function hashToken(token: string): string {
   return crypto.createHash('sha256').update(token).digest('hex');
 }
 
-export async function issueRefreshToken(userId: string, settings: TokenSettings, familyId: string = crypto.randomUUID(), transaction?: Transaction): Promise<string> {
+/** A new refresh token: what the client keeps, and the row that keeps its hash. */
+function newRefreshToken(userId: string, settings: TokenSettings, familyId: string = crypto.randomUUID()) {
   const token = crypto.randomBytes(32).toString('base64url');
-  await RefreshToken.create(
-    { userId, familyId, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + settings.refreshTtlSeconds * 1000) },
-    { transaction },
-  );
+  return { token, row: { userId, familyId, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + settings.refreshTtlSeconds * 1000) } };
+}
+
+export async function issueRefreshToken(userId: string, settings: TokenSettings, familyId?: string, transaction?: Transaction): Promise<string> {
+  const { token, row } = newRefreshToken(userId, settings, familyId);
+  await RefreshToken.create(row, { transaction });
   return token;
 }
 
 /** issueRefreshToken as one statement written in `transaction` now: the token, and the promise of its row. */
 export function writeRefreshToken(transaction: Transaction, userId: string, settings: TokenSettings): { token: string; written: Promise<unknown> } {
-  const token = crypto.randomBytes(32).toString('base64url');
+  const { token, row } = newRefreshToken(userId, settings);
   const written = preparedRows(transaction, 'INSERT INTO refresh_tokens (user_id, family_id, token_hash, expires_at) VALUES ($1::uuid, $2::uuid, $3::text, $4::timestamptz)', [
-    userId,
-    crypto.randomUUID(),
-    hashToken(token),
-    new Date(Date.now() + settings.refreshTtlSeconds * 1000),
+    row.userId,
+    row.familyId,
+    row.tokenHash,
+    row.expiresAt,
   ]);
   return { token, written };
 }

@@ -39,9 +39,13 @@ function nameOf(text: string): string {
   return name;
 }
 
+/** Transactions whose COMMIT is already written (thenCommit): a statement written after it would run outside them. */
+const commitWritten = new WeakSet<Transaction>();
+
 function connectionOf(transaction: Transaction): PgConnection {
   const connection = (transaction as unknown as OpenTransaction).connection;
   if (!connection) throw new Error('preparedRows needs a transaction with its connection');
+  if (commitWritten.has(transaction)) throw new Error('a statement was written after its transaction\'s COMMIT (thenCommit must be the last)');
   return connection;
 }
 
@@ -74,6 +78,7 @@ export async function preparedRows<T = Record<string, unknown>>(transaction: Tra
   if (!options.thenCommit) return written();
   const open = transaction as unknown as OpenTransaction;
   const [rows, committed] = writtenTogether(transaction, () => [written(), rowsOf(connection.query({ text: 'COMMIT' }), 'COMMIT')] as const);
+  commitWritten.add(transaction);
   const [statement, commit] = await Promise.allSettled([rows, committed]);
   if (commit.status === 'rejected') {
     // The connection's state is unknown: destroyed rather than returned to the pool (as Sequelize does).
@@ -102,6 +107,17 @@ export function writtenTogether<R>(transaction: Transaction, write: () => R): R 
   } finally {
     socket?.uncork?.();
   }
+}
+
+/**
+ * The answers of statements written together, once every one has come (so none is still pending
+ * when the transaction is left); the first failure, if any, is thrown.
+ */
+export async function allAnswered<T extends readonly unknown[]>(answers: T): Promise<{ -readonly [K in keyof T]: Awaited<T[K]> }> {
+  const settled = await Promise.allSettled(answers);
+  const failed = settled.find((r): r is PromiseRejectedResult => r.status === 'rejected');
+  if (failed) throw failed.reason;
+  return settled.map((r) => (r as PromiseFulfilledResult<unknown>).value) as { -readonly [K in keyof T]: Awaited<T[K]> };
 }
 
 /** Writes `text` (no parameters) on the transaction's connection now; the promise settles with its answer. */

@@ -120,4 +120,17 @@ describe('the pipelined tenant transaction', () => {
     expect(ownWrites).toHaveLength(2);
     expect(Math.min(...ownWrites)).toBeGreaterThanOrEqual(2);
   });
+
+  it('refuses a statement written after the COMMIT that thenCommit wrote: it would run outside the transaction', async () => {
+    const attempt = inTenant(t.sequelize, lab.lab.id, async (transaction) => {
+      const last = preparedRows(transaction, 'SELECT 1 AS one', [], { thenCommit: true });
+      try {
+        return preparedRows(transaction, 'SELECT 2 AS two', []);
+      } finally {
+        await last;
+      }
+    });
+    await expect(attempt).rejects.toThrow(/after its transaction's COMMIT/);
+    expect(await modelOf(lab.device.id)).toBeTruthy(); // the pool still serves
+  });
 });
