@@ -4,8 +4,8 @@
  * statements: PostgreSQL parses and plans each text once per connection instead of on every
  * request (after five executions PostgreSQL keeps the generic plan when it costs no more than
  * planning anew, as for lookups by primary key), and no model instances are built for rows that
- * are only read. A statement whose best plan depends on its values (the run list: a search
- * pattern, a rare or common state) goes `unnamed`: planned for its values each time, still with
+ * are only read. A statement whose best plan depends on its values (a run list with a search
+ * pattern or several states) goes `unnamed`: planned for its values each time, still with
  * parameters and without Sequelize. Everything else goes through Sequelize models. Errors are wrapped as Sequelize's DatabaseError, so the error handler
  * answers them exactly like the rest (503 when the database is restarting, 404 for a malformed id).
  */

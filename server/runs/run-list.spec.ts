@@ -8,7 +8,9 @@ import { startTestApp, type TestApp } from '../../test/support/test-app';
 import { buildLabScenario, signIn } from '../../test/support/factories';
 import { Client, Device, TestPlan } from '../db/models';
 import { QueryTypes } from 'sequelize';
-import { asSystem } from '../tenancy/tenant-transaction';
+import { asSystem, inTenant } from '../tenancy/tenant-transaction';
+import { listRuns } from './run-list';
+import type { ListQuery } from '../http/list-query';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -167,5 +169,42 @@ describe('GET /api/runs', () => {
     expect((await get('?search=bulk-0031')).body.total).toBe(10); // BULK-00310 ... BULK-00319
     expect((await get('?search=bulk&state=testing')).body.total).toBe(320);
     expect((await get('')).body.total).toBe(326);
+  });
+
+  it('plans a list without a search, of at most one state and a page size the screens offer, once per connection; others for their values', async () => {
+    const { s: scenario } = await lab();
+    interface Session { query(q: { text: string; values?: unknown[] }): Promise<{ rows: Record<string, unknown>[] }> }
+    // Each list in a tenant transaction of its own, as a request makes it; the session (pooled connection) it ran on is kept.
+    const listed = async (q: Partial<ListQuery>) => {
+      let session: Session | undefined;
+      const answer = await inTenant(t.sequelize, scenario.lab.id, (transaction) => {
+        session = (transaction as unknown as { connection: Session }).connection;
+        return listRuns(transaction, scenario.lab.id, { page: 1, pageSize: 25, sort: 'updatedAt', direction: 'DESC', filter: {}, ...q });
+      });
+      return { answer, session: session! };
+    };
+    // PostgreSQL's view of the session's named statements (pg_prepared_statements, PostgreSQL 14+): how
+    // often each was run on a generic plan and how often planned for its values.
+    const prepared = async (session: Session, fragment: string) =>
+      (await session.query({ text: 'SELECT statement, generic_plans::int AS generic, custom_plans::int AS custom FROM pg_prepared_statements WHERE statement LIKE $1', values: [`%${fragment}%`] })).rows;
+    const first = await listed({ filter: { state: 'in-review' }, sort: 'client', direction: 'ASC', page: 1 });
+    expect(first.answer.total).toBe(2);
+    const second = await listed({ filter: { state: 'in-review' }, sort: 'client', direction: 'ASC', page: 2, pageSize: 25 });
+    expect(second.answer).toMatchObject({ items: [], total: 2, page: 2 });
+    // One text for both pages (the state and page size written in, the offset a parameter), on its generic plan from the first run.
+    const runs = second.session === first.session ? 2 : 1;
+    expect(await prepared(first.session, "r.state = 'in-review' ORDER BY r.client_name ASC")).toEqual([expect.objectContaining({ generic: runs, custom: 0 })]);
+    // The generic plan was asked for in the list's transaction only: the session is back to PostgreSQL's default.
+    expect((await first.session.query({ text: 'SHOW plan_cache_mode' })).rows[0].plan_cache_mode).toBe('auto');
+    // A search, two states or another page size: no named statement (planned for their values each time).
+    const search = await listed({ filter: { search: 'ZX-9' } });
+    expect(search.answer.total).toBe(3);
+    expect(await prepared(search.session, 'run_search_terms')).toEqual([]);
+    const two = await listed({ filter: { state: 'testing,in-review' }, sort: 'number', direction: 'ASC' });
+    expect(two.answer.total).toBe(6);
+    expect(await prepared(two.session, 'state = ANY(')).toEqual([]);
+    const odd = await listed({ pageSize: 7, sort: 'createdAt', direction: 'ASC' });
+    expect(odd.answer.items).toHaveLength(6);
+    expect(await prepared(odd.session, 'ORDER BY r.created_at ASC, r.id ASC LIMIT')).toEqual([]);
   });
 });
