@@ -44,7 +44,14 @@ export function buildApp(deps: AppDeps): express.Express {
     }),
   );
   const passport = configurePassport(deps.tokens.secret);
+  // API answers are a lab's records: never kept by a browser or a proxy (OWASP's guidance for
+  // sensitive data), so no ETag either; Express would otherwise hash every body for one.
+  app.set('etag', false);
   const api = express.Router();
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
   // The payment webhook's signature covers the exact bytes: keep its body raw (json then skips it).
   api.use('/billing/webhook', express.raw({ type: () => true, limit: '1mb' }));
   api.use(express.json({ limit: '1mb' }));

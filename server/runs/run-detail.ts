@@ -6,24 +6,22 @@
  * a case, however many readings the run has collected (every save keeps the earlier ones).
  */
 import type { Transaction } from 'sequelize';
+import { isoText } from '../db/iso-text';
 import { preparedRows } from '../db/prepared-query';
 import { notFound } from '../http/problem';
 import { calibrationStatus, todayIso } from '../instruments/calibration-status';
 import type { TestCase } from '../db/models';
 
-/** A timestamp as JavaScript's toISOString writes it (milliseconds, truncated, Z). */
-const iso = (column: string) => `to_char(${column} AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`;
-
 const resultJson = (alias: string, source: 'readingId' | 'uploadId') => `json_build_object(
   'id', ${alias}.id, '${source}', ${alias}.${source === 'readingId' ? 'reading_id' : 'upload_id'}, 'engineVersion', ${alias}.engine_version,
   'value', ${alias}.value, 'unit', ${alias}.unit, 'limit', ${alias}.limit_value, 'margin', ${alias}.margin,
   'expandedUncertainty', ${alias}.expanded_uncertainty, 'coverageFactor', ${alias}.coverage_factor, 'verdict', ${alias}.verdict,
-  'detail', ${alias}.detail, 'createdAt', ${iso(`${alias}.created_at`)})`;
+  'detail', ${alias}.detail, 'createdAt', ${isoText(`${alias}.created_at`)})`;
 
 const RUN_DETAIL = `
 SELECT r.id, r.number, r.state, r.plan_id AS "planId", r.engineer_id AS "engineerId", r.reviewer_id AS "reviewerId",
        r.return_reason AS "returnReason", r.tested_from::text AS "testedFrom", r.tested_to::text AS "testedTo",
-       ${iso('r.created_at')} AS "createdAt", ${iso('r.updated_at')} AS "updatedAt",
+       ${isoText('r.created_at')} AS "createdAt", ${isoText('r.updated_at')} AS "updatedAt",
        json_build_object('id', p.id, 'name', p.name, 'ruleSet', p.rule_set_snapshot) AS plan,
        json_build_object('id', d.id, 'manufacturer', d.manufacturer, 'model', d.model, 'serialNumber', d.serial_number,
                          'emissionDesignator', d.emission_designator, 'ratedPepW', d.rated_pep_w) AS device,
@@ -35,7 +33,7 @@ SELECT r.id, r.number, r.state, r.plan_id AS "planId", r.engineer_id AS "enginee
                   WHERE ri.organization_id = r.organization_id AND ri.run_id = r.id), '[]') AS instruments,
        coalesce((SELECT json_agg(json_build_object(
                   'id', tc.id, 'position', tc.position, 'kind', tc.kind, 'label', tc.label, 'parameters', tc.parameters,
-                  'reading', (SELECT json_build_object('id', rd.id, 'values', rd.values, 'enteredBy', rd.entered_by, 'createdAt', ${iso('rd.created_at')})
+                  'reading', (SELECT json_build_object('id', rd.id, 'values', rd.values, 'enteredBy', rd.entered_by, 'createdAt', ${isoText('rd.created_at')})
                                 FROM readings rd WHERE rd.organization_id = r.organization_id AND rd.run_id = r.id AND rd.test_case_id = tc.id
                                ORDER BY rd.created_at DESC LIMIT 1),
                   'result', (SELECT ${resultJson('rs', 'readingId')}
@@ -49,7 +47,7 @@ SELECT r.id, r.number, r.state, r.plan_id AS "planId", r.engineer_id AS "enginee
                                 'file', json_build_object('name', u.file_name, 'sizeBytes', u.file_size_bytes, 'sha256', u.file_sha256, 'href', '/api/uploads/' || u.id || '/file'),
                                 'data', CASE WHEN u.data_key IS NULL THEN NULL ELSE json_build_object('name', u.data_file_name, 'sizeBytes', u.data_size_bytes, 'sha256', u.data_sha256, 'href', '/api/uploads/' || u.id || '/file?part=data') END,
                                 'parameters', u.parameters, 'engineVersion', u.engine_version, 'uploadedBy', u.uploaded_by,
-                                'viaApiKey', u.api_key_id IS NOT NULL, 'createdAt', ${iso('u.created_at')}) ORDER BY u.created_at DESC)
+                                'viaApiKey', u.api_key_id IS NOT NULL, 'createdAt', ${isoText('u.created_at')}) ORDER BY u.created_at DESC)
                                  FROM uploads u WHERE u.organization_id = r.organization_id AND u.run_id = r.id AND u.test_case_id = tc.id), '[]')
                 ) ORDER BY tc.position)
                   FROM test_cases tc WHERE tc.organization_id = r.organization_id AND tc.plan_id = r.plan_id), '[]') AS "testCases"

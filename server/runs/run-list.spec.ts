@@ -64,6 +64,9 @@ describe('GET /api/runs', () => {
     expect(review.body.items.map((r: Row) => r.id)).toEqual([ids[1], ids[4]]);
     expect(review.body.total).toBe(2);
     expect(review.body.items[0]).toEqual(expect.objectContaining({ state: 'in-review', planName: 'ZX-9 plan', model: 'ZX-9 list test radio', client: 'Aardvark Marine Radio' }));
+    // Times as Date#toISOString writes them (UTC, milliseconds, Z), though PostgreSQL keeps microseconds.
+    expect(review.body.items[0].updatedAt).toBe('2026-11-01T02:00:00.000Z');
+    for (const item of first.body.items as { createdAt: string }[]) expect(new Date(item.createdAt).toISOString()).toBe(item.createdAt);
   });
 
   it('searches run numbers, models, serial numbers and client names', async () => {

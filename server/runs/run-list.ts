@@ -5,6 +5,7 @@
  * the join; a total for no filter or states alone comes from the per-state counts.
  */
 import type { Transaction } from 'sequelize';
+import { isoText } from '../db/iso-text';
 import { allAnswered, preparedRows, writtenTogether } from '../db/prepared-query';
 import { badRequest } from '../http/problem';
 import { page, type ListQuery } from '../http/list-query';
@@ -25,8 +26,9 @@ export interface RunListItem {
   id: string;
   number: string;
   state: string;
-  updatedAt: Date;
-  createdAt: Date;
+  /** ISO 8601 (db/iso-text.ts) */
+  updatedAt: string;
+  createdAt: string;
   engineerId: string | null;
   planName: string;
   manufacturer: string;
@@ -118,7 +120,7 @@ export async function listRuns(transaction: Transaction, organizationId: string,
   // The total is an uncorrelated subquery: PostgreSQL evaluates it once per statement (an InitPlan).
   // The page is joined to it, so a page past the end still answers one row, with the total: this
   // statement is always the request's last, and its COMMIT goes with it (server/db/prepared-query.ts).
-  const sql = `SELECT t.total, x.id, x.number, x.state, x.updated_at AS "updatedAt", x.created_at AS "createdAt", x.engineer_id AS "engineerId",
+  const sql = `SELECT t.total, x.id, x.number, x.state, ${isoText('x.updated_at')} AS "updatedAt", ${isoText('x.created_at')} AS "createdAt", x.engineer_id AS "engineerId",
             x.plan_name AS "planName", x.manufacturer, x.model, x.serial_number AS "serialNumber", x.client_name AS client
        FROM (SELECT ${total ? `(${total})` : 'NULL'} AS total) t
        LEFT JOIN (SELECT r.id, r.number, r.state, r.updated_at, r.created_at, r.engineer_id, r.client_name, r.device_model,

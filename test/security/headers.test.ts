@@ -1,7 +1,7 @@
 /**
  * Transport and header hardening: a strict Content-Security-Policy (self only, no inline
  * scripts), no CORS for other origins, refresh cookies HttpOnly + SameSite (+ Secure when
- * configured), and no secret or token in the logs.
+ * configured), API answers never cached, and no secret or token in the logs.
  */
 import request from 'supertest';
 import { startTestApp, type TestApp } from '../support/test-app';
@@ -23,6 +23,22 @@ test('Content-Security-Policy allows only our own origin and no inline script (h
   expect(csp).toContain("frame-ancestors 'none'");
   expect(res.headers['x-content-type-options']).toBe('nosniff');
   expect(res.headers['x-powered-by']).toBeUndefined();
+});
+
+test('API answers are not kept by browsers or proxies: Cache-Control no-store and no ETag (OWASP guidance for sensitive data, from memory)', async () => {
+  const lab = await buildOrganization(t.sequelize);
+  const user = await buildUser(t.sequelize, lab.id, ['engineer']);
+  const signedIn = await request(t.app).post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
+  expect(signedIn.status).toBe(200);
+  for (const res of [
+    signedIn,
+    await request(t.app).get('/api/runs').set('Authorization', `Bearer ${signedIn.body.accessToken}`).set('X-Organization-Id', lab.id),
+    await request(t.app).get('/api/health'),
+    await request(t.app).get('/api/no-such-route'),
+  ]) {
+    expect(res.headers['cache-control']).toBe('no-store');
+    expect(res.headers.etag).toBeUndefined();
+  }
 });
 
 test('CORS is closed: another origin gets no Access-Control-Allow-Origin, even on preflight', async () => {
