@@ -39,6 +39,9 @@ function nameOf(text: string): string {
   return name;
 }
 
+/** Until the end of the transaction, a named statement runs on its generic plan (preparedRows' `genericPlan`). */
+const FORCE_GENERIC_PLAN = "SELECT set_config('plan_cache_mode', 'force_generic_plan', true)";
+
 /** Transactions whose COMMIT is already written (thenCommit): a statement written after it would run outside them. */
 const commitWritten = new WeakSet<Transaction>();
 
@@ -71,13 +74,22 @@ async function rowsOf<T>(query: Promise<{ rows: Record<string, unknown>[] }>, te
  * transaction ends here, committed (or rolled back, when the statement failed: PostgreSQL
  * answers the COMMIT of a failed transaction with a ROLLBACK). tenancy/tenant-transaction.ts then
  * has nothing left to commit.
+ * `genericPlan` (a named statement with `thenCommit` only): PostgreSQL runs it on its generic plan
+ * from the first execution, where it would otherwise plan it for its values at least five times
+ * and then keep doing so whenever it guesses the generic plan costlier. The setting is written
+ * with the statement, for the rest of the transaction: nothing follows but the COMMIT.
  */
-export async function preparedRows<T = Record<string, unknown>>(transaction: Transaction, text: string, values: unknown[], options: { unnamed?: boolean; thenCommit?: boolean } = {}): Promise<T[]> {
+export async function preparedRows<T = Record<string, unknown>>(transaction: Transaction, text: string, values: unknown[], options: { unnamed?: boolean; thenCommit?: boolean; genericPlan?: boolean } = {}): Promise<T[]> {
   const connection = connectionOf(transaction);
+  if (options.genericPlan && (options.unnamed || !options.thenCommit)) throw new Error('genericPlan is for a named statement that is its transaction\'s last (thenCommit)');
   const written = () => rowsOf<T>(connection.query(options.unnamed ? { text, values } : { name: nameOf(text), text, values }), text);
   if (!options.thenCommit) return written();
   const open = transaction as unknown as OpenTransaction;
-  const [rows, committed] = writtenTogether(transaction, () => [written(), rowsOf(connection.query({ text: 'COMMIT' }), 'COMMIT')] as const);
+  const [rows, committed] = writtenTogether(transaction, () => {
+    const forced = options.genericPlan ? rowsOf(connection.query({ name: nameOf(FORCE_GENERIC_PLAN), text: FORCE_GENERIC_PLAN }), FORCE_GENERIC_PLAN) : null;
+    const statement = written();
+    return [forced ? allAnswered([forced, statement] as const).then(([, r]) => r) : statement, rowsOf(connection.query({ text: 'COMMIT' }), 'COMMIT')] as const;
+  });
   commitWritten.add(transaction);
   const [statement, commit] = await Promise.allSettled([rows, committed]);
   if (commit.status === 'rejected') {

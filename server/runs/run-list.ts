@@ -6,7 +6,7 @@
  */
 import type { Transaction } from 'sequelize';
 import { isoText } from '../db/iso-text';
-import { allAnswered, preparedRows, writtenTogether } from '../db/prepared-query';
+import { preparedRows } from '../db/prepared-query';
 import { badRequest } from '../http/problem';
 import { page, type ListQuery } from '../http/list-query';
 import { RUN_STATES } from '../../shared/runs/run-state';
@@ -40,8 +40,6 @@ export interface RunListItem {
 const MAX_SEARCH_WORDS = 8;
 /** Page sizes the screens offer: their lists are named statements with the size written in (listRuns). */
 const GENERIC_PAGE_SIZES = new Set([10, 25, 50, 100]);
-/** Written before a named list statement, in the same transaction: its generic plan is used from the first time. */
-const FORCE_GENERIC_PLAN = "SELECT set_config('plan_cache_mode', 'force_generic_plan', true)";
 /** Above this many runs matching a search, the list reads runs in its order and checks each against the matches. */
 const MANY_MATCHES = 300;
 const HASHED_MATCHES = 20_000;
@@ -88,7 +86,7 @@ export async function listRuns(transaction: Transaction, organizationId: string,
   if (matched) where.push(hashed ? `(r.id IN (${matched}) OR false)` : `r.id IN (${matched})`);
   // Most lists (no search, at most one state, a page size the screens offer) are named statements
   // with their state, sort and page size written in, and run with PostgreSQL's generic plan
-  // (FORCE_GENERIC_PLAN): planned once per connection, where planning for each request's values
+  // (preparedRows' `genericPlan`): planned once per connection, where planning for each request's values
   // took about 0.5 ms, a third of the statement's time under load. The state is in the text, so a
   // rare state still has a plan of its own, and the shapes stay few (sorts x states x engineer
   // filter x page sizes). A search or several states are planned for their values each time
@@ -130,12 +128,7 @@ export async function listRuns(transaction: Transaction, organizationId: string,
                     JOIN test_plans p ON p.organization_id = $1 AND p.id = r.plan_id
                     JOIN devices d ON d.organization_id = $1 AND d.id = p.device_id) x ON true
       ORDER BY x.${column} ${q.direction}, x.id ${q.direction}`;
-  type Row = (RunListItem & { total: string | null }) | { total: string | null; id: null };
-  const rows = await writtenTogether(transaction, () => {
-    const forced = generic ? preparedRows(transaction, FORCE_GENERIC_PLAN, []) : null;
-    const listed = preparedRows<Row>(transaction, sql, values, { unnamed: !generic, thenCommit: true });
-    return forced ? allAnswered([forced, listed] as const).then(([, r]) => r) : listed;
-  });
+  const rows = await preparedRows<(RunListItem & { total: string | null }) | { total: string | null; id: null }>(transaction, sql, values, { unnamed: !generic, genericPlan: generic, thenCommit: true });
   const known = rows[0].total === null ? matches : Number(rows[0].total);
   const items = rows.filter((row): row is RunListItem & { total: string | null } => row.id !== null).map(({ total: _total, ...item }) => item);
   return page(items, known, q);

@@ -133,4 +133,12 @@ describe('the pipelined tenant transaction', () => {
     await expect(attempt).rejects.toThrow(/after its transaction's COMMIT/);
     expect(await modelOf(lab.device.id)).toBeTruthy(); // the pool still serves
   });
+
+  it('takes genericPlan only for a named statement that ends its transaction, where the setting cannot outlive it', async () => {
+    for (const options of [{ genericPlan: true }, { genericPlan: true, thenCommit: true, unnamed: true }]) {
+      await expect(inTenant(t.sequelize, lab.lab.id, (transaction) => preparedRows(transaction, 'SELECT 1 AS one', [], options))).rejects.toThrow(/genericPlan is for a named statement/);
+    }
+    const rows = await inTenant(t.sequelize, lab.lab.id, (transaction) => preparedRows<{ mode: string }>(transaction, "SELECT current_setting('plan_cache_mode') AS mode", [], { genericPlan: true, thenCommit: true }));
+    expect(rows).toEqual([{ mode: 'force_generic_plan' }]);
+  });
 });
